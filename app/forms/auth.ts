@@ -1,0 +1,60 @@
+// Zod schemas of the sign-in, sign-up and password forms; used in the browser and on the server.
+import { z } from "zod";
+import { roles } from "~/roles";
+
+const email = z.string({ error: "Enter your e-mail address." }).trim().toLowerCase().email("Enter a valid e-mail address.");
+
+export const newPassword = z
+  .string({ error: "Choose a password." })
+  .min(10, "Use at least 10 characters.")
+  .max(128, "Use at most 128 characters.")
+  .refine((p) => /[A-Za-z]/.test(p) && /[^A-Za-z]/.test(p), "Mix letters with digits or symbols.")
+  .refine((p) => new Set(p).size >= 5, "That password is too easy to guess.");
+
+const passwords = { password: newPassword, confirm: z.string({ error: "Repeat the password." }) };
+const samePasswords = (v: { password: string; confirm: string }) => v.password === v.confirm;
+const differ = { message: "The two passwords differ.", path: ["confirm"] };
+
+export const signInSchema = z.object({
+  email,
+  password: z.string({ error: "Enter your password." }),
+  redirectTo: z.string().optional(),
+});
+
+const name = z.string({ error: "Enter your name." }).trim().min(2, "Enter your name.").max(100);
+
+export const signUpSchema = z.object({ name, email, ...passwords }).refine(samePasswords, differ);
+
+export const forgotSchema = z.object({ email });
+
+export const resetSchema = z.object({ token: z.string({ error: "The link is incomplete." }), ...passwords }).refine(samePasswords, differ);
+
+export const acceptSchema = z.object({ name, ...passwords }).refine(samePasswords, differ);
+
+export const organizationSchema = z.object({
+  name: z.string({ error: "Name your consultancy." }).trim().min(2, "Name your consultancy.").max(120),
+});
+
+export const inviteSchema = z.object({
+  intent: z.literal("invite"),
+  email,
+  role: z.enum(roles, { error: "Pick a role." }),
+});
+
+export const changeRoleSchema = z.object({
+  intent: z.literal("change-role"),
+  memberId: z.string().min(1),
+  role: z.enum(roles, { error: "Pick a role." }),
+});
+
+export const removeMemberSchema = z.object({ intent: z.literal("remove"), memberId: z.string().min(1) });
+
+export const cancelInviteSchema = z.object({ intent: z.literal("cancel-invite"), invitationId: z.string().min(1) });
+
+export const memberActionSchema = z.discriminatedUnion("intent", [inviteSchema, changeRoleSchema, removeMemberSchema, cancelInviteSchema]);
+
+/** Where to go after sign-in: only paths on this site. */
+export function safeRedirect(to: string | null | undefined, fallback = "/") {
+  if (!to || !to.startsWith("/") || to.startsWith("//") || to.startsWith("/\\")) return fallback;
+  return to;
+}

@@ -1,0 +1,75 @@
+import { getFormProps, useForm } from "@conform-to/react";
+import { parseWithZod } from "@conform-to/zod/v4";
+import { and, eq, gt } from "drizzle-orm";
+import { data, Form, Link, redirect } from "react-router";
+import { Button } from "~/components/button";
+import { Field, FormErrors } from "~/components/field";
+import { Card, PageHeader } from "~/components/panels";
+import { db, schema } from "~/db.server";
+import { inputProps } from "~/forms/conform";
+import { organizationSchema } from "~/forms/auth";
+import { redirectWithFlash } from "~/flash.server";
+import { createOrganization, DomainError } from "~/members.server";
+import { findMembership, requireUser } from "~/permissions.server";
+import type { Route } from "./+types/welcome";
+
+export const meta: Route.MetaFunction = () => [{ title: "Set up your organisation · Isotrope" }];
+
+export async function loader({ request }: Route.LoaderArgs) {
+  const { user } = await requireUser(request);
+  if (await findMembership(user.id)) throw redirect("/");
+  const invitations = await db
+    .select({ id: schema.invitation.id, organizationName: schema.organization.name, role: schema.invitation.role })
+    .from(schema.invitation)
+    .innerJoin(schema.organization, eq(schema.organization.id, schema.invitation.organizationId))
+    .where(and(eq(schema.invitation.email, user.email), eq(schema.invitation.status, "pending"), gt(schema.invitation.expiresAt, new Date())));
+  return { invitations };
+}
+
+export async function action({ request }: Route.ActionArgs) {
+  const { user } = await requireUser(request);
+  const submission = parseWithZod(await request.formData(), { schema: organizationSchema });
+  if (submission.status !== "success") return data(submission.reply(), { status: 400 });
+  try {
+    await createOrganization(user.id, submission.value.name);
+  } catch (error) {
+    if (error instanceof DomainError) return data(submission.reply({ formErrors: [error.message] }), { status: error.status });
+    throw error;
+  }
+  return redirectWithFlash("/", { kind: "success", message: `${submission.value.name} is set up. Invite your colleagues from Members.` });
+}
+
+export default function Welcome({ loaderData, actionData }: Route.ComponentProps) {
+  const [form, fields] = useForm({
+    lastResult: actionData,
+    onValidate: ({ formData }) => parseWithZod(formData, { schema: organizationSchema }),
+    shouldValidate: "onBlur",
+  });
+  return (
+    <div className="max-w-xl">
+      <PageHeader title="Set up your organisation">You are signed in but belong to no organisation yet.</PageHeader>
+      {loaderData.invitations.length ? (
+        <Card title="Invitations waiting for you">
+          <ul className="space-y-2 text-sm">
+            {loaderData.invitations.map((i) => (
+              <li key={i.id}>
+                <Link className="text-field-600 underline" to={`/invite/${i.id}`}>
+                  Join {i.organizationName} as {i.role}
+                </Link>
+              </li>
+            ))}
+          </ul>
+        </Card>
+      ) : null}
+      <div className="mt-5">
+        <Card title="Start a new consultancy">
+          <Form method="post" {...getFormProps(form)} className="space-y-4">
+            <FormErrors errors={form.errors} />
+            <Field label="Consultancy name" {...inputProps(fields.name, "text")} />
+            <Button>Create the organisation</Button>
+          </Form>
+        </Card>
+      </div>
+    </div>
+  );
+}

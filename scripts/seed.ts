@@ -1,0 +1,58 @@
+// Seeds the invented demo scenario, once, into an empty database.
+import { randomUUID } from "node:crypto";
+import { sql as rawSql } from "drizzle-orm";
+import { auth } from "../app/auth.server";
+import { db, schema, sql } from "../app/db.server";
+import type { Role } from "../app/roles";
+
+const password = process.env.DEMO_PASSWORD ?? "isotrope-demo";
+
+const organisations = [
+  {
+    name: "Kestrel Lane RF Consulting",
+    slug: "kestrel-lane",
+    people: [
+      ["owner", "Maren Quill"],
+      ["engineer", "Tobin Arkwright"],
+      ["reviewer", "Ilse Navarro-Penn"],
+      ["billing", "Dov Hallorann"],
+      ["client", "Priya Fenwick (Larchmont Estates)"],
+      ["regulator", "Osric Vey (Spectrum Safety Office)"],
+    ].map(([role, name]) => ({ role: role as Role, name, email: `${role}@demo.isotrope.test` })),
+  },
+  {
+    name: "Second Harbour Engineering",
+    slug: "second-harbour",
+    people: [{ role: "engineer" as Role, name: "Wendell Soto-Marsh", email: "engineer@second.isotrope.test" }],
+  },
+];
+
+async function main() {
+  const [{ n }] = await db.select({ n: rawSql<number>`count(*)::int` }).from(schema.user);
+  if (n > 0) {
+    console.log("database already has data; demo seed skipped");
+    return;
+  }
+  const hash = await (await auth.$context).password.hash(password);
+  await db.transaction(async (tx) => {
+    for (const org of organisations) {
+      const organizationId = randomUUID();
+      await tx.insert(schema.organization).values({ id: organizationId, name: org.name, slug: org.slug });
+      for (const person of org.people) {
+        const userId = randomUUID();
+        await tx.insert(schema.user).values({ id: userId, name: person.name, email: person.email, emailVerified: true });
+        await tx.insert(schema.account).values({ id: randomUUID(), accountId: userId, providerId: "credential", userId, password: hash });
+        await tx.insert(schema.member).values({ id: randomUUID(), organizationId, userId, role: person.role });
+      }
+    }
+  });
+  console.log(`demo scenario seeded: ${organisations.map((o) => o.name).join(", ")}`);
+}
+
+main()
+  .then(() => sql.end())
+  .catch(async (error) => {
+    console.error(error);
+    await sql.end();
+    process.exit(1);
+  });
