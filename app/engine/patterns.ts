@@ -1,0 +1,252 @@
+/**
+ * Antenna pattern attenuation relative to boresight, in dB (≥ 0 means weaker
+ * than boresight). Angles are off-boresight in the antenna's own frame:
+ * φ horizontal (positive clockwise seen from above), θ vertical (positive up).
+ * All functions take radians.
+ */
+
+/** Pattern description as accepted by the request schema. */
+export type PatternSpec =
+  | "isotropic"
+  | { type: "isotropic" }
+  | {
+      type: "3gpp-38.901";
+      hBeamwidthDeg: number;
+      vBeamwidthDeg: number;
+      maxAttenuationDb?: number;
+      sideLobeDb?: number;
+    }
+  | { type: "itu-r-f.1336-sectoral"; hBeamwidthDeg: number; vBeamwidthDeg: number; k?: number }
+  | {
+      type: "tabulated";
+      horizontal: { angleDeg: number; attenuationDb: number }[];
+      vertical: { angleDeg: number; attenuationDb: number }[];
+      maxAttenuationDb?: number;
+    };
+
+export const PATTERN_ISOTROPIC = 0;
+export const PATTERN_3GPP = 1;
+export const PATTERN_F1336 = 2;
+export const PATTERN_TABULATED = 3;
+
+/** Plain-number pattern constants, hoisted once per emitter. */
+export interface PreparedPattern {
+  kind: number;
+  /** Horizontal / vertical half-power beamwidths, radians (0 where not defined). */
+  h3: number;
+  v3: number;
+  /** 3GPP: 12/φ3², 12/θ3² (per rad²), A_max, SLA_V (dB). */
+  cH: number;
+  cV: number;
+  am: number;
+  sla: number;
+  /** F.1336 constants (see f1336Attenuation). */
+  k: number;
+  xk: number;
+  lambdaKh: number;
+  lambdaKv: number;
+  cC: number;
+  g180: number;
+  ghrBack: number;
+  /** Tabulated cuts, sorted on [0, 360) degrees, wrapped. */
+  hAng: Float64Array;
+  hAtt: Float64Array;
+  vAng: Float64Array;
+  vAtt: Float64Array;
+}
+
+const RAD = Math.PI / 180;
+const EMPTY = new Float64Array(0);
+
+function blank(kind: number): PreparedPattern {
+  return {
+    kind,
+    h3: 0,
+    v3: 0,
+    cH: 0,
+    cV: 0,
+    am: Infinity,
+    sla: Infinity,
+    k: 0,
+    xk: 0,
+    lambdaKh: 0,
+    lambdaKv: 0,
+    cC: 0,
+    g180: 0,
+    ghrBack: 0,
+    hAng: EMPTY,
+    hAtt: EMPTY,
+    vAng: EMPTY,
+    vAtt: EMPTY,
+  };
+}
+
+/** Sort a cut onto [0, 360) degrees; duplicates keep the last value. */
+function prepareCut(cut: { angleDeg: number; attenuationDb: number }[]): [Float64Array, Float64Array] {
+  const pts = cut.map((p) => [((p.angleDeg % 360) + 360) % 360, p.attenuationDb] as const);
+  pts.sort((a, b) => a[0] - b[0]);
+  const ang: number[] = [];
+  const att: number[] = [];
+  for (const [a, v] of pts) {
+    if (ang.length && ang[ang.length - 1] === a) att[att.length - 1] = v;
+    else {
+      ang.push(a);
+      att.push(v);
+    }
+  }
+  return [Float64Array.from(ang), Float64Array.from(att)];
+}
+
+/** Hoist the per-emitter pattern constants. */
+export function preparePattern(spec: PatternSpec | undefined): PreparedPattern {
+  if (spec === undefined || spec === "isotropic" || spec.type === "isotropic") return blank(PATTERN_ISOTROPIC);
+  if (spec.type === "3gpp-38.901") {
+    const p = blank(PATTERN_3GPP);
+    p.h3 = spec.hBeamwidthDeg * RAD;
+    p.v3 = spec.vBeamwidthDeg * RAD;
+    p.cH = 12 / (p.h3 * p.h3);
+    p.cV = 12 / (p.v3 * p.v3);
+    p.am = spec.maxAttenuationDb ?? 30;
+    p.sla = spec.sideLobeDb ?? 30;
+    return p;
+  }
+  if (spec.type === "itu-r-f.1336-sectoral") {
+    const p = blank(PATTERN_F1336);
+    const phi3 = spec.hBeamwidthDeg;
+    const th3 = spec.vBeamwidthDeg;
+    const k = spec.k ?? 0.7;
+    p.h3 = phi3 * RAD;
+    p.v3 = th3 * RAD;
+    p.k = k;
+    // Rec. ITU-R F.1336-5 §3.1 (peak side-lobe sectoral pattern) — from memory.
+    p.xk = Math.sqrt(1 - 0.36 * k);
+    p.lambdaKh = 3 * (1 - 0.5 ** -k);
+    p.g180 = -12 + 10 * Math.log10(1 + 8 * k) - 15 * Math.log10(180 / th3);
+    p.cC =
+      (10 * Math.log10(((180 / th3) ** 1.5 * (4 ** -1.5 + k)) / (1 + 8 * k))) / Math.log10(22.5 / th3);
+    p.lambdaKv = 12 - p.cC * Math.log10(4) - 10 * Math.log10(4 ** -1.5 + k);
+    p.ghrBack = f1336Ghr(p, 180 / phi3);
+    return p;
+  }
+  const p = blank(PATTERN_TABULATED);
+  [p.hAng, p.hAtt] = prepareCut(spec.horizontal);
+  [p.vAng, p.vAtt] = prepareCut(spec.vertical);
+  p.am = spec.maxAttenuationDb ?? Infinity;
+  p.h3 = tabulatedBeamwidthDeg(p.hAng, p.hAtt) * RAD;
+  p.v3 = tabulatedBeamwidthDeg(p.vAng, p.vAtt) * RAD;
+  return p;
+}
+
+/**
+ * 3GPP TR 38.901 §7.3, Table 7.3-1 element pattern, used as a relative pattern:
+ * A = min( min(12(φ/φ3dB)², A_max) + min(12(θ/θ3dB)², SLA_V), A_max ).
+ */
+export function attenuation3gpp(p: PreparedPattern, phi: number, theta: number): number {
+  let ah = p.cH * phi * phi;
+  if (ah > p.am) ah = p.am;
+  let av = p.cV * theta * theta;
+  if (av > p.sla) av = p.sla;
+  const a = ah + av;
+  return a > p.am ? p.am : a;
+}
+
+/** F.1336-5 horizontal relative gain G_hr(x_h), dB (≤ 0), floored at G180. */
+function f1336Ghr(p: PreparedPattern, xh: number): number {
+  const g = xh <= 0.5 ? -12 * xh * xh : -12 * xh ** (2 - p.k) - p.lambdaKh;
+  return g < p.g180 ? p.g180 : g;
+}
+
+/** F.1336-5 vertical relative gain G_vr(x_v), dB (≤ 0), floored at G180. */
+function f1336Gvr(p: PreparedPattern, xv: number): number {
+  let g: number;
+  if (xv < p.xk) g = -12 * xv * xv;
+  else if (xv < 4) g = -12 + 10 * Math.log10(xv ** -1.5 + p.k);
+  else g = -p.lambdaKv - p.cC * Math.log10(xv);
+  return g < p.g180 ? p.g180 : g;
+}
+
+/**
+ * Rec. ITU-R F.1336-5 §3.1, sectoral reference pattern (peak side lobes), as a
+ * relative pattern: G = G_hr(x_h) + R·G_vr(x_v), R = (G_hr(x_h) − G_hr(180/φ3)) /
+ * (G_hr(0) − G_hr(180/φ3)), x_h = |φ|/φ3, x_v = |θ|/θ3. From memory.
+ */
+export function attenuationF1336(p: PreparedPattern, phi: number, theta: number): number {
+  const xh = Math.abs(phi) / p.h3;
+  const xv = Math.abs(theta) / p.v3;
+  const ghr = f1336Ghr(p, xh);
+  const r = p.ghrBack === 0 ? 1 : (ghr - p.ghrBack) / (0 - p.ghrBack);
+  const g = ghr + r * f1336Gvr(p, xv);
+  const a = -g;
+  return a > -p.g180 ? -p.g180 : a < 0 ? 0 : a;
+}
+
+/** Linear interpolation on a wrapped 360° cut (angles sorted on [0, 360)). */
+export function interpolateCut(ang: Float64Array, att: Float64Array, deg: number): number {
+  const n = ang.length;
+  if (n === 1) return att[0];
+  let a = deg % 360;
+  if (a < 0) a += 360;
+  // binary search for the last index with ang[i] ≤ a
+  let lo = 0;
+  let hi = n - 1;
+  if (a < ang[0] || a >= ang[n - 1]) {
+    const a0 = ang[n - 1];
+    const a1 = ang[0] + 360;
+    const x = a < ang[0] ? a + 360 : a;
+    const t = (x - a0) / (a1 - a0);
+    return att[n - 1] + t * (att[0] - att[n - 1]);
+  }
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (ang[mid] <= a) lo = mid;
+    else hi = mid;
+  }
+  const t = (a - ang[lo]) / (ang[hi] - ang[lo]);
+  return att[lo] + t * (att[hi] - att[lo]);
+}
+
+/**
+ * Tabulated horizontal and vertical cuts combined by summation (the usual
+ * "2D interpolation by summing cuts"): A = A_H(φ) + A_V(θ), capped at the
+ * pattern's maxAttenuationDb when given. The vertical cut's angle is measured
+ * positive BELOW boresight (the convention of common antenna pattern files and
+ * of tiltDeg), so θ (positive up) is looked up at −θ.
+ */
+export function attenuationTabulated(p: PreparedPattern, phi: number, theta: number): number {
+  const a = interpolateCut(p.hAng, p.hAtt, phi / RAD) + interpolateCut(p.vAng, p.vAtt, -theta / RAD);
+  return a > p.am ? p.am : a;
+}
+
+/** Half-power (3 dB) beamwidth of a tabulated cut, degrees, relative to its value at 0°. */
+export function tabulatedBeamwidthDeg(ang: Float64Array, att: Float64Array): number {
+  const ref = interpolateCut(ang, att, 0) + 3;
+  let right = 180;
+  for (let d = 0.1; d <= 180; d += 0.1) {
+    if (interpolateCut(ang, att, d) >= ref) {
+      right = d;
+      break;
+    }
+  }
+  let left = 180;
+  for (let d = 0.1; d <= 180; d += 0.1) {
+    if (interpolateCut(ang, att, -d) >= ref) {
+      left = d;
+      break;
+    }
+  }
+  return Math.min(360, right + left);
+}
+
+/** Attenuation (dB) of any prepared pattern at off-boresight angles φ, θ (radians). */
+export function patternAttenuationDb(p: PreparedPattern, phi: number, theta: number): number {
+  switch (p.kind) {
+    case PATTERN_3GPP:
+      return attenuation3gpp(p, phi, theta);
+    case PATTERN_F1336:
+      return attenuationF1336(p, phi, theta);
+    case PATTERN_TABULATED:
+      return attenuationTabulated(p, phi, theta);
+    default:
+      return 0;
+  }
+}
