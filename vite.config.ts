@@ -20,6 +20,7 @@ export default defineConfig({
           include: ["tests/integration/**/*.test.ts"],
           environment: "node",
           globalSetup: ["tests/integration/global-setup.ts"],
+          env: { SIGN_IN_LIMIT: "5", SIGN_IN_WINDOW_SECONDS: "60" },
           fileParallelism: false,
           testTimeout: 30_000,
           hookTimeout: 60_000,

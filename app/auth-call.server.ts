@@ -14,7 +14,7 @@ export async function callAuth(request: Request, path: string, body?: Record<str
     if (value) headers.set(name, value);
   }
   const response = await auth.handler(
-    new Request(new URL(`/api/auth${path}`, env.BASE_URL), {
+    new Request(new URL(`/api/auth${path}`, env.APP_URL), {
       method: "POST",
       headers,
       body: JSON.stringify(body ?? {}),

@@ -22,11 +22,11 @@ export const accessRoles = {
   regulator: noManagement,
 };
 
-const trustedOrigins = [env.BASE_URL, env.BASE_URL.replace("127.0.0.1", "localhost")];
+const trustedOrigins = [env.APP_URL, env.APP_URL.replace("127.0.0.1", "localhost")];
 
 export const auth = betterAuth({
   appName: "Isotrope",
-  baseURL: env.BASE_URL,
+  baseURL: env.APP_URL,
   basePath: "/api/auth",
   secret: env.BETTER_AUTH_SECRET,
   trustedOrigins,

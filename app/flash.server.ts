@@ -11,7 +11,7 @@ const storage = createCookieSessionStorage<Record<string, never>, { flash: Flash
     sameSite: "lax",
     path: "/",
     secrets: [env.BETTER_AUTH_SECRET],
-    secure: env.BASE_URL.startsWith("https:"),
+    secure: env.APP_URL.startsWith("https:"),
   },
 });
 

@@ -26,6 +26,11 @@ function audit(tx: Tx, actor: Actor, action: string, subjectType: string, subjec
   return tx.insert(auditEvent).values({ organizationId: actor.organizationId, actorUserId: actor.userId, action, subjectType, subjectId, detail });
 }
 
+export async function accountExists(email: string) {
+  const [row] = await db.select({ id: user.id }).from(user).where(eq(user.email, email.toLowerCase()));
+  return Boolean(row);
+}
+
 export async function listMembers(organizationId: string) {
   return db
     .select({ id: member.id, role: member.role, joinedAt: member.createdAt, userId: user.id, name: user.name, email: user.email })
@@ -78,7 +83,7 @@ export async function inviteMember(actor: Actor & { inviterName: string; organiz
     linkMail(email, `Join ${actor.organizationName} on Isotrope`, [
       `${actor.inviterName} invites you to ${actor.organizationName} on Isotrope as ${roleLabels[role]}.`,
       `The link works for ${INVITATION_DAYS} days.`,
-    ], { label: "Accept the invitation", url: `${env.BASE_URL}/invite/${id}` }),
+    ], { label: "Accept the invitation", url: `${env.APP_URL}/invite/${id}` }),
   );
   return id;
 }
@@ -147,8 +152,7 @@ export async function findInvitation(invitationId: string) {
     row.status === "accepted" ? "This invitation has already been used." :
     row.status !== "pending" ? "This invitation was withdrawn. Ask for a new one." :
     row.expiresAt < new Date() ? "This invitation has expired. Ask for a new one." : null;
-  const [existing] = await db.select({ id: user.id }).from(user).where(eq(user.email, row.email));
-  return { ...row, problem, hasAccount: Boolean(existing) };
+  return { ...row, problem, hasAccount: await accountExists(row.email) };
 }
 
 /** Marks the invitation used and adds the membership; fails if someone used it first. */

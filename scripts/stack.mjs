@@ -9,7 +9,10 @@ import { join, resolve } from "node:path";
 import { setTimeout as sleep } from "node:timers/promises";
 
 const root = resolve(import.meta.dirname, "..");
-const mode = process.argv[2] ?? "start"; // start | dev | test
+// start | dev | test | with (test services, then the command after `--`)
+const mode0 = process.argv[2] ?? "start";
+const withCommand = mode0 === "with" ? process.argv.slice(process.argv.indexOf("--") + 1) : null;
+const mode = mode0 === "with" ? "test" : mode0;
 const isRoot = process.getuid?.() === 0;
 
 const profiles = {
@@ -161,8 +164,9 @@ async function startMail() {
   background("mail", join(root, "node_modules/.bin/maildev"), [
     "--smtp", String(ports.smtp), "--ip", "127.0.0.1",
     "--web", String(ports.mailWeb), "--web-ip", "127.0.0.1", "--silent",
+    "--mail-directory", join(root, ".data", `mail-${mode === "test" ? "test" : "start"}`),
   ]);
-  await waitForHttp(`http://127.0.0.1:${ports.mailWeb}/email`, "the mail catcher");
+  await waitForHttp(`http://127.0.0.1:${ports.mailWeb}/api/healthz`, "the mail catcher");
   return { smtp: `smtp://127.0.0.1:${ports.smtp}`, web: `http://127.0.0.1:${ports.mailWeb}` };
 }
 
@@ -196,7 +200,7 @@ async function services() {
     SMTP_URL: mail.smtp,
     MAILDEV_API: mail.web ?? "",
     STRIPE_API_BASE: stripe,
-    BASE_URL: process.env.BASE_URL && mode !== "test" ? process.env.BASE_URL : baseUrl,
+    APP_URL: process.env.APP_URL && mode !== "test" ? process.env.APP_URL : baseUrl,
     PORT: String(ports.app),
     BETTER_AUTH_SECRET: mode === "test" ? "isotrope-test-secret-0123456789abcdef0123456789" : authSecret(),
   };
@@ -214,7 +218,7 @@ async function startApp(env) {
     if (mode !== "test") run("npm", ["run", "-s", "build"], { cwd: root });
     background("app", join(root, "node_modules/.bin/react-router-serve"), [join(root, "build/server/index.js")], { ...env, HOST: "127.0.0.1", NODE_ENV: "production" });
   }
-  await waitForHttp(`${env.BASE_URL}/api/health`, "the app", 120);
+  await waitForHttp(`${env.APP_URL}/api/health`, "the app", 120);
 }
 
 const DEMO = ["owner", "engineer", "reviewer", "billing", "client", "regulator"].map((r) => `${r}@demo.isotrope.test`);
@@ -224,7 +228,7 @@ async function start() {
   await startApp(env);
   console.log(`
   Isotrope is running.
-    app            ${env.BASE_URL}
+    app            ${env.APP_URL}
     mail catcher   ${mail.web ?? env.SMTP_URL}
     payment fake   ${env.STRIPE_API_BASE}
   Demo sign-ins (password: ${process.env.DEMO_PASSWORD ?? "isotrope-demo"}):
@@ -301,5 +305,15 @@ function shutdown(code) {
 process.on("SIGINT", () => shutdown(130));
 process.on("SIGTERM", () => shutdown(143));
 
-if (mode === "test") await test();
+async function withServices() {
+  process.env.STACK_QUIET = "1";
+  const { env } = await services();
+  if (withCommand.length === 0) fail("usage: node scripts/stack.mjs with -- COMMAND [ARGS]");
+  if (process.env.WITH_APP) await startApp({ ...env, SIGN_IN_LIMIT: "500" });
+  const result = spawnSync(withCommand[0], withCommand.slice(1), { cwd: root, stdio: "inherit", env: process.env });
+  shutdown(result.status ?? 1);
+}
+
+if (withCommand) await withServices();
+else if (mode === "test") await test();
 else await start();

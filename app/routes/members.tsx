@@ -81,7 +81,7 @@ function RoleCell({ row }: { row: MemberRow }) {
 
 function RemoveCell({ row, isMe }: { row: MemberRow; isMe: boolean }) {
   const [open, setOpen] = useState(false);
-  if (isMe) return <span className="text-xs text-ink-400">you</span>;
+  if (isMe) return <span className="text-xs text-ink-600">you</span>;
   return (
     <>
       <Button type="button" tone="danger" className="px-2.5 py-1" onClick={() => setOpen(true)}>

@@ -6,6 +6,7 @@ import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
 import { inputProps } from "~/forms/conform";
 import { signUpSchema } from "~/forms/auth";
+import { accountExists } from "~/members.server";
 import { getSignedIn } from "~/permissions.server";
 import type { Route } from "./+types/sign-up";
 
@@ -16,24 +17,24 @@ export async function loader({ request }: Route.LoaderArgs) {
   return null;
 }
 
+const taken = "An account with this e-mail already exists. Sign in, or reset the password.";
+
 export async function action({ request }: Route.ActionArgs) {
   const submission = parseWithZod(await request.formData(), { schema: signUpSchema });
   if (submission.status !== "success") return data(submission.reply({ hideFields: ["password", "confirm"] }), { status: 400 });
   const { name, email, password } = submission.value;
+  if (await accountExists(email)) {
+    return data(
+      submission.reply({ fieldErrors: { email: [taken] }, hideFields: ["password", "confirm"] }),
+      { status: 409 },
+    );
+  }
   const result = await callAuth(request, "/sign-up/email", { name, email, password, callbackURL: "/verified" });
   if (result.ok) return redirect(`/check-email?email=${encodeURIComponent(email)}`);
   if (result.status === 429) {
     return data(submission.reply({ formErrors: ["Too many attempts. Wait a minute, then try again."] }), { status: 429 });
   }
-  const taken = result.code?.includes("USER_ALREADY_EXISTS") || result.status === 422;
-  return data(
-    submission.reply({
-      fieldErrors: taken ? { email: ["An account with this e-mail already exists. Sign in, or reset the password."] } : {},
-      formErrors: taken ? [] : [result.message ?? "The account could not be created."],
-      hideFields: ["password", "confirm"],
-    }),
-    { status: taken ? 409 : 400 },
-  );
+  return data(submission.reply({ formErrors: [result.message ?? "The account could not be created."], hideFields: ["password", "confirm"] }), { status: 400 });
 }
 
 export default function SignUp({ actionData }: Route.ComponentProps) {

@@ -1,0 +1,54 @@
+// An owner invites a member by e-mail; the invitee signs up through the link and lands in the organisation.
+import { expect, test } from "@playwright/test";
+import { latestMail, linkIn, shot, signIn, unique } from "./helpers";
+
+test("an owner invites a reviewer who accepts and sees the reviewer's view", async ({ browser }, info) => {
+  const email = unique("reviewer");
+  const owner = await (await browser.newContext()).newPage();
+  await signIn(owner, "owner@demo.isotrope.test");
+  await owner.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Members" }).click();
+  await expect(owner.getByRole("heading", { name: "Members" })).toBeVisible();
+  const start = Date.now() - 1000;
+  await owner.getByLabel("E-mail").fill(email);
+  await owner.getByLabel("Role", { exact: true }).selectOption("reviewer");
+  await owner.getByRole("button", { name: "Send invitation" }).click();
+  await expect(owner.getByText(`Invitation sent to ${email}`)).toBeVisible();
+  await expect(owner.getByRole("listitem").filter({ hasText: email })).toBeVisible();
+  await shot(owner, info, "01-members-with-invitation");
+
+  const mail = await latestMail(email, /Join Kestrel Lane RF Consulting/, start);
+  const invitee = await (await browser.newContext()).newPage();
+  await invitee.goto(linkIn(mail));
+  await expect(invitee.getByRole("heading", { name: "Join Kestrel Lane RF Consulting" })).toBeVisible();
+  await expect(invitee.getByText("Reviewing engineer")).toBeVisible();
+  await invitee.getByLabel("Your name").fill("Rhea Invited");
+  await invitee.getByLabel("Password", { exact: true }).fill("reviewer-Pass-31");
+  await invitee.getByLabel("Repeat the password").fill("reviewer-Pass-31");
+  await shot(invitee, info, "02-accept");
+  await invitee.getByRole("button", { name: "Create my account and join" }).click();
+  await expect(invitee.getByRole("heading", { name: /Good to see you, Rhea/ })).toBeVisible();
+  await expect(invitee.getByText("Reviewing engineer").first()).toBeVisible();
+  await expect(invitee.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Members" })).toHaveCount(0);
+  await shot(invitee, info, "03-reviewer-overview");
+
+  // The link is spent.
+  await invitee.goto(linkIn(mail));
+  await expect(invitee.getByText("This invitation has already been used.")).toBeVisible();
+
+  // The reviewer cannot open the members page.
+  const response = await invitee.goto("/members");
+  expect(response?.status()).toBe(403);
+
+  // The owner sees the new member and changes the role.
+  await owner.reload();
+  const row = owner.getByRole("row").filter({ hasText: email });
+  await expect(row).toBeVisible();
+  await row.getByLabel(/Role of/).selectOption("engineer");
+  await row.getByRole("button", { name: "Save" }).click();
+  await expect(owner.getByText("Role changed to Engineer.")).toBeVisible();
+
+  await owner.getByRole("row").filter({ hasText: email }).getByRole("button", { name: "Remove" }).click();
+  await owner.getByRole("dialog").getByRole("button", { name: "Remove" }).click();
+  await expect(owner.getByText("Member removed.")).toBeVisible();
+  await expect(owner.getByRole("row").filter({ hasText: email })).toHaveCount(0);
+});
