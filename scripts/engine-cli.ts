@@ -32,6 +32,12 @@ function threadCount(): number {
   return Math.max(1, Math.min(availableParallelism(), 8));
 }
 
+// A closed pipe (e.g. `| head`) is not an error of ours.
+process.stdout.on("error", (e: NodeJS.ErrnoException) => {
+  if (e.code === "EPIPE") process.exit(0);
+  throw e;
+});
+
 async function main(): Promise<void> {
   const src = process.argv[2];
   if (!src) fail("usage: npm run -s evaluate -- FILE   (FILE a path, or - for stdin)");

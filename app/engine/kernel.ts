@@ -11,8 +11,8 @@
  *   φ = atan2(s, f₂),                     θ = atan2(u, √(f₂² + s²)),
  * so a point on the tilted boresight (f = R·cos t, dz = −R·sin t) has u = 0.
  */
+import { absAtan2, atanPos, expNeg } from "./fastmath";
 import {
-  attenuation3gpp,
   patternAttenuationDb,
   PATTERN_3GPP,
   PATTERN_ISOTROPIC,
@@ -166,10 +166,17 @@ export function accumulateRow(
   const sla = p.sla;
   const sinAz = pe.sinAz;
   const cosAz = pe.cosAz;
-  const cMin = kSph * Math.exp(-am * DB_TO_NEPER);
+  const cMin = kSph * expNeg(-am * DB_TO_NEPER);
   // |φ| ≥ φ_cap ⇔ 12(φ/φ3)² ≥ A_max: the horizontal term alone reaches the cap.
   const phiCap = Math.sqrt(am / cH);
   const cosPhiCap = phiCap >= Math.PI ? -2 : Math.cos(phiCap);
+  const kV = cV * DB_TO_NEPER;
+  const gMin = expNeg(-am * DB_TO_NEPER);
+  const vt = p.vTable;
+  const useTable = vt.length > 0;
+  const vTmax = p.vTmax;
+  const vInv = p.vInvStep;
+  const gSla = p.gSla;
   if (pe.sinT === 0) {
     // Tilt 0: φ and the horizontal distance do not depend on height.
     for (let i = 0; i < nx; i++) {
@@ -188,27 +195,45 @@ export function accumulateRow(
         }
         continue;
       }
-      const phi = Math.atan2(s, f);
+      const phi = absAtan2(s, f);
       let ah = cH * phi * phi;
       if (ah > am) ah = am;
+      const invRh = rh > 0 ? 1 / rh : 1e300;
+      if (useTable) {
+        // g = max(g_H·G(t), g_min): A = min(min(A_H, A_max) + min(A_V, SLA_V), A_max) in gain form.
+        const gh = expNeg(-ah * DB_TO_NEPER);
+        for (let k = 0; k < nz; k++) {
+          const dz = dzs[k];
+          let r2 = rh2 + dz2s[k];
+          if (r2 < R2_MIN) r2 = R2_MIN;
+          const t = (dz < 0 ? -dz : dz) * invRh;
+          let gv: number;
+          if (t >= vTmax) gv = gSla;
+          else {
+            const u = t * vInv;
+            const i0 = u | 0;
+            const a0 = vt[i0];
+            gv = a0 + (u - i0) * (vt[i0 + 1] - a0);
+          }
+          let g = gh * gv;
+          if (g < gMin) g = gMin;
+          acc[base + k] += (kSph * g) / r2;
+        }
+        continue;
+      }
       // The vertical term at which the total stops growing (SLA_V or the A_max cap).
       let capV = am - ah;
       if (capV > sla) capV = sla;
-      const thCap = Math.sqrt(capV / cV);
-      const tanCap = thCap >= Math.PI / 2 ? Infinity : Math.tan(thCap);
-      const limDz = rh * tanCap;
-      const cCap = kSph * Math.exp(-(ah + capV) * DB_TO_NEPER);
+      const th2Cap = capV / cV;
+      const cCap = kSph * expNeg(-(ah + capV) * DB_TO_NEPER);
+      const cH0 = kSph * expNeg(-ah * DB_TO_NEPER);
       for (let k = 0; k < nz; k++) {
         const dz = dzs[k];
         let r2 = rh2 + dz2s[k];
         if (r2 < R2_MIN) r2 = R2_MIN;
-        const adz = dz < 0 ? -dz : dz;
-        if (adz >= limDz) {
-          acc[base + k] += cCap / r2;
-        } else {
-          const th = Math.atan(adz / rh);
-          acc[base + k] += (kSph * Math.exp(-(ah + cV * th * th) * DB_TO_NEPER)) / r2;
-        }
+        const th = atanPos((dz < 0 ? -dz : dz) * invRh);
+        const th2 = th * th;
+        acc[base + k] += (th2 >= th2Cap ? cCap : cH0 * expNeg(-kV * th2)) / r2;
       }
     }
     return;
@@ -236,8 +261,15 @@ export function accumulateRow(
         continue;
       }
       const u = fs + dz * cosT;
-      const a = attenuation3gpp(p, Math.atan2(s, f2), Math.atan2(u, rho));
-      acc[base + k] += (kSph * Math.exp(-a * DB_TO_NEPER)) / r2;
+      const phi = absAtan2(s, f2);
+      const th = absAtan2(u, rho);
+      let ah = cH * phi * phi;
+      if (ah > am) ah = am;
+      let av = cV * th * th;
+      if (av > sla) av = sla;
+      let a = ah + av;
+      if (a > am) a = am;
+      acc[base + k] += (kSph * expNeg(-a * DB_TO_NEPER)) / r2;
     }
   }
 }

@@ -48,6 +48,15 @@ export interface PreparedPattern {
   cC: number;
   g180: number;
   ghrBack: number;
+  /**
+   * 3GPP vertical gain table G(t) = max(10^(−min(12(θ/θ3)², SLA_V)/10)) with
+   * θ = atan t, on t ∈ [0, vTmax] at N_VTABLE intervals (linear interpolation,
+   * relative error < 4·10⁻⁷); G = gSla beyond. Empty when θ_SLA ≥ 80°.
+   */
+  vTable: Float64Array;
+  vTmax: number;
+  vInvStep: number;
+  gSla: number;
   /** Tabulated cuts, sorted on [0, 360) degrees, wrapped. */
   hAng: Float64Array;
   hAtt: Float64Array;
@@ -74,11 +83,36 @@ function blank(kind: number): PreparedPattern {
     cC: 0,
     g180: 0,
     ghrBack: 0,
+    vTable: EMPTY,
+    vTmax: 0,
+    vInvStep: 0,
+    gSla: 0,
     hAng: EMPTY,
     hAtt: EMPTY,
     vAng: EMPTY,
     vAtt: EMPTY,
   };
+}
+
+export const N_VTABLE = 8192;
+const vTables = new Map<string, Float64Array>();
+
+/** Memoised 3GPP vertical gain table (see PreparedPattern.vTable); depends only on (12/θ3², SLA_V). */
+function verticalTable(cV: number, sla: number, tMax: number): Float64Array {
+  const key = `${cV}|${sla}`;
+  let t = vTables.get(key);
+  if (!t) {
+    t = new Float64Array(N_VTABLE + 2);
+    const gSla = 10 ** (-sla / 10);
+    for (let i = 0; i < t.length; i++) {
+      const th = Math.atan((i * tMax) / N_VTABLE);
+      const g = 10 ** (-(cV * th * th) / 10);
+      t[i] = g > gSla ? g : gSla;
+    }
+    if (vTables.size > 64) vTables.clear();
+    vTables.set(key, t);
+  }
+  return t;
 }
 
 /** Sort a cut onto [0, 360) degrees; duplicates keep the last value. */
@@ -108,6 +142,13 @@ export function preparePattern(spec: PatternSpec | undefined): PreparedPattern {
     p.cV = 12 / (p.v3 * p.v3);
     p.am = spec.maxAttenuationDb ?? 30;
     p.sla = spec.sideLobeDb ?? 30;
+    p.gSla = 10 ** (-p.sla / 10);
+    const thSla = Math.sqrt(p.sla / p.cV);
+    if (thSla < 80 * RAD) {
+      p.vTmax = Math.tan(thSla);
+      p.vInvStep = N_VTABLE / p.vTmax;
+      p.vTable = verticalTable(p.cV, p.sla, p.vTmax);
+    }
     return p;
   }
   if (spec.type === "itu-r-f.1336-sectoral") {
