@@ -128,7 +128,7 @@ export default function Members({ loaderData }: Route.ComponentProps) {
         <TableShell caption="Members of the organisation" columns={columns} rows={members} empty="No members yet." />
         <div className="grid gap-6 md:grid-cols-2">
           <Card title="Invite someone">
-            <Form method="post" {...getFormProps(form)} className="space-y-4">
+            <Form method="post" {...getFormProps(form)} key={invitations.map((i) => i.id).join()} className="space-y-4">
               <input type="hidden" name="intent" value="invite" />
               <FormErrors errors={form.errors} />
               <Field label="E-mail" autoComplete="off" {...inputProps(fields.email, "email")} />

@@ -33,7 +33,9 @@ export async function signIn(page: Page, email: string, password = demoPassword)
 }
 
 export async function shot(page: Page, info: TestInfo, name: string) {
-  await info.attach(name, { body: await page.screenshot({ fullPage: true, path: info.outputPath(`${name}.png`) }), contentType: "image/png" });
+  const path = info.outputPath(`${name}.png`);
+  await page.screenshot({ fullPage: true, path });
+  await info.attach(name, { path, contentType: "image/png" });
 }
 
 export const unique = (prefix: string) => `${prefix}-${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}@example.test`;
