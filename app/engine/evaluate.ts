@@ -31,7 +31,9 @@ export function parseRequest(json: unknown): ParseResult {
   const r = requestSchema.safeParse(json);
   if (r.success) return { ok: true, request: r.data };
   const issue = r.error.issues[0];
-  const field = fieldPath(issue.path);
+  // An unknown key is reported on its object; name the key itself.
+  const path = issue.code === "unrecognized_keys" ? [...issue.path, issue.keys[0]] : issue.path;
+  const field = fieldPath(path);
   return { ok: false, field, message: `${field}: ${issue.message}` };
 }
 
