@@ -92,9 +92,13 @@ export function percentAt(pe: PreparedEmitter, x: number, y: number, z: number):
   } else if ((model === MODEL_CYLINDRICAL || model === MODEL_AUTO) && Math.abs(dz) <= pe.halfH) {
     let rh = Math.sqrt(rh2);
     if (rh < R_MIN) rh = R_MIN;
-    if (model === MODEL_CYLINDRICAL || rh < pe.crossR) {
-      return (pe.kCyl * cylinderSectorFactor(pe, Math.atan2(s, f))) / rh;
-    }
+    const sector = cylinderSectorFactor(pe, Math.atan2(s, f));
+    if (model === MODEL_CYLINDRICAL || rh < pe.crossR) return (pe.kCyl * sector) / rh;
+    // Auto beyond the crossover R*: spherical, but never below the cylindrical value at R*
+    // continued as 1/R² — continuous at R*, and the conservative choice in the transition.
+    const continued = (pe.kCyl * sector * pe.crossR) / (rh * rh);
+    const sph = sphericalPercent(pe, f, s, dz, r2);
+    return sph > continued ? sph : continued;
   }
   return sphericalPercent(pe, f, s, dz, r2);
 }
