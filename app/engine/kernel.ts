@@ -266,9 +266,24 @@ export function accumulateRow(
       }
       const u = fs + dz * cosT;
       const phi = absAtan2(s, f2);
-      const th = absAtan2(u, rho);
       let ah = cH * phi * phi;
       if (ah > am) ah = am;
+      if (useTable) {
+        const t = (u < 0 ? -u : u) / (rho > 0 ? rho : 1e-300);
+        let gv: number;
+        if (t >= vTmax) gv = gSla;
+        else {
+          const w = t * vInv;
+          const i0 = w | 0;
+          const a0 = vt[i0];
+          gv = a0 + (w - i0) * (vt[i0 + 1] - a0);
+        }
+        let g = expNeg(-ah * DB_TO_NEPER) * gv;
+        if (g < gMin) g = gMin;
+        acc[base + k] += (kSph * g) / r2;
+        continue;
+      }
+      const th = absAtan2(u, rho);
       let av = cV * th * th;
       if (av > sla) av = sla;
       let a = ah + av;

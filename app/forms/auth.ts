@@ -31,6 +31,10 @@ export const resetSchema = z.object({ token: z.string({ error: "The link is inco
 
 export const acceptSchema = z.object({ name, ...passwords }).refine(samePasswords, differ);
 
+export const changePasswordSchema = z
+  .object({ current: z.string({ error: "Enter your current password." }), ...passwords })
+  .refine(samePasswords, differ);
+
 export const organizationSchema = z.object({
   name: z.string({ error: "Name your consultancy." }).trim().min(2, "Name your consultancy.").max(120),
 });

@@ -1,4 +1,13 @@
+import { getFormProps, useForm } from "@conform-to/react";
+import { parseWithZod } from "@conform-to/zod/v4";
+import { data, Form } from "react-router";
+import { callAuth, cookiesOf } from "~/auth-call.server";
+import { Button } from "~/components/button";
+import { Field, FormErrors } from "~/components/field";
 import { Card, PageHeader } from "~/components/panels";
+import { inputProps } from "~/forms/conform";
+import { changePasswordSchema } from "~/forms/auth";
+import { redirectWithFlash } from "~/flash.server";
 import { requireMember } from "~/permissions.server";
 import { roleLabels } from "~/roles";
 import type { Route } from "./+types/account";
@@ -10,26 +19,57 @@ export async function loader({ request }: Route.LoaderArgs) {
   return { name: me.user.name, email: me.user.email, role: me.role, organizationName: me.organizationName };
 }
 
-export default function Account({ loaderData }: Route.ComponentProps) {
+export async function action({ request }: Route.ActionArgs) {
+  await requireMember(request);
+  const submission = parseWithZod(await request.formData(), { schema: changePasswordSchema });
+  const hide = { hideFields: ["current", "password", "confirm"] };
+  if (submission.status !== "success") return data(submission.reply(hide), { status: 400 });
+  const result = await callAuth(request, "/change-password", {
+    currentPassword: submission.value.current,
+    newPassword: submission.value.password,
+    revokeOtherSessions: true,
+  });
+  if (!result.ok) {
+    const message = result.status === 429 ? "Too many attempts. Wait a minute, then try again." : "Your current password is not right.";
+    return data(submission.reply({ ...hide, fieldErrors: result.status === 429 ? {} : { current: [message] }, formErrors: result.status === 429 ? [message] : [] }), { status: result.status === 429 ? 429 : 400 });
+  }
+  return redirectWithFlash("/account", { kind: "success", message: "Password changed. Other devices are signed out." }, { headers: cookiesOf(result) });
+}
+
+export default function Account({ loaderData, actionData }: Route.ComponentProps) {
   const { name, email, role, organizationName } = loaderData;
+  const [form, fields] = useForm({
+    lastResult: actionData,
+    onValidate: ({ formData }) => parseWithZod(formData, { schema: changePasswordSchema }),
+    shouldValidate: "onBlur",
+    shouldRevalidate: "onInput",
+  });
   return (
     <>
-      <PageHeader title="Account" />
-      <Card>
-        <dl className="grid grid-cols-[10rem_1fr] gap-y-2 text-sm">
-          <dt className="text-ink-600">Name</dt>
-          <dd>{name}</dd>
-          <dt className="text-ink-600">E-mail</dt>
-          <dd>{email}</dd>
-          <dt className="text-ink-600">Organisation</dt>
-          <dd>{organizationName}</dd>
-          <dt className="text-ink-600">Role</dt>
-          <dd>{roleLabels[role]}</dd>
-        </dl>
-        <p className="mt-4 text-sm text-ink-600">
-          To change your password, sign out and use “Forgot your password?”. Your organisation's owner changes roles.
-        </p>
-      </Card>
+      <PageHeader title="Account">Your own details. Your organisation's owner sets roles.</PageHeader>
+      <div className="grid gap-6 md:grid-cols-2">
+        <Card title="You">
+          <dl className="grid grid-cols-[8rem_1fr] gap-y-2 text-sm">
+            <dt className="text-ink-600">Name</dt>
+            <dd>{name}</dd>
+            <dt className="text-ink-600">E-mail</dt>
+            <dd>{email}</dd>
+            <dt className="text-ink-600">Organisation</dt>
+            <dd>{organizationName}</dd>
+            <dt className="text-ink-600">Role</dt>
+            <dd>{roleLabels[role]}</dd>
+          </dl>
+        </Card>
+        <Card title="Change password">
+          <Form method="post" {...getFormProps(form)} className="space-y-4">
+            <FormErrors errors={form.errors} />
+            <Field label="Current password" autoComplete="current-password" {...inputProps(fields.current, "password")} />
+            <Field label="New password" autoComplete="new-password" hint="At least 10 characters, letters mixed with digits or symbols." {...inputProps(fields.password, "password")} />
+            <Field label="Repeat the new password" autoComplete="new-password" {...inputProps(fields.confirm, "password")} />
+            <Button>Change password</Button>
+          </Form>
+        </Card>
+      </div>
     </>
   );
 }

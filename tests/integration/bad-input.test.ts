@@ -5,6 +5,7 @@ import { and, eq, like } from "drizzle-orm";
 import { beforeAll, describe, expect, it, vi } from "vitest";
 import { db, schema } from "~/db.server";
 import { env } from "~/env.server";
+import * as account from "~/routes/account";
 import * as apiAuth from "~/routes/api.auth";
 import * as forgot from "~/routes/forgot-password";
 import * as invite from "~/routes/invite";
@@ -13,7 +14,7 @@ import * as reset from "~/routes/reset-password";
 import * as signIn from "~/routes/sign-in";
 import * as signUp from "~/routes/sign-up";
 import * as verified from "~/routes/verified";
-import { createOrg, createUser, freshIp, makeRequest, outcome, password, type Org } from "./fixtures";
+import { createOrg, createSession, createUser, freshIp, makeRequest, outcome, password, type Org } from "./fixtures";
 
 const args = (request: Request, params: Record<string, string> = {}) => ({ request, params, context: {} }) as never;
 const usersWith = (email: string) => db.select().from(schema.user).where(eq(schema.user.email, email));
@@ -168,6 +169,17 @@ describe("invitations", () => {
     expect(await usersWith(inv.email)).toHaveLength(1);
   });
 
+  it("lets a signed-in person with the invited address join, and no one else", async () => {
+    const other = await createOrg("joiner");
+    const inv = await invitation({ email: other.people.billing.email, role: "reviewer" });
+    const stranger = await outcome(() => invite.action(args(makeRequest(`/invite/${inv.id}`, { cookie: other.people.engineer.cookie, form: {} }), { invitationId: inv.id })));
+    expect(stranger.status).toBe(403);
+    const joined = await outcome(() => invite.action(args(makeRequest(`/invite/${inv.id}`, { cookie: other.people.billing.cookie, form: {} }), { invitationId: inv.id })));
+    expect(joined).toMatchObject({ status: 302, location: "/" });
+    const memberships = await db.select().from(schema.member).where(eq(schema.member.userId, other.people.billing.userId));
+    expect(memberships.map((m) => [m.organizationId, m.role]).sort()).toEqual([[org.id, "reviewer"], [other.id, "billing"]].sort());
+  });
+
   it("writes nothing when the invitee's address already has an account", async () => {
     const inv = await invitation({ email: org.people.client.email });
     const got = await accept(inv.id);
@@ -175,6 +187,27 @@ describe("invitations", () => {
     const [row] = await db.select().from(schema.invitation).where(eq(schema.invitation.id, inv.id));
     expect(row.status).toBe("pending");
     expect(await usersWith(org.people.client.email)).toHaveLength(1);
+  });
+});
+
+describe("account", () => {
+  const change = (cookie: string, current: string) =>
+    outcome(() => account.action(args(makeRequest("/account", { cookie, ip: freshIp(), form: { current, password: "another-Pass-55", confirm: "another-Pass-55" } }))));
+  const hashOf = async (userId: string) => (await db.select().from(schema.account).where(eq(schema.account.userId, userId)))[0].password;
+
+  it("refuses a wrong current password and keeps the old one", async () => {
+    const member = org.people.reviewer;
+    const before = await hashOf(member.userId);
+    const wrong = await change(member.cookie, "not-my-password-1");
+    expect(wrong.status).toBe(400);
+    expect(message(wrong.body)).toContain("current password is not right");
+    expect(await hashOf(member.userId)).toBe(before);
+  });
+
+  it("sends a signed-in user without an organisation to /welcome before anything else", async () => {
+    const userId = await createUser(`loner-${randomUUID()}@fixture.test`);
+    const got = await change(await createSession(userId), password);
+    expect(got).toMatchObject({ status: 302, location: "/welcome" });
   });
 });
 

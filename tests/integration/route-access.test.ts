@@ -61,6 +61,7 @@ const modules: Record<string, Record<string, unknown>> = {
 const cases: Case[] = [
   { file: "routes/home.tsx", method: "loader", path: () => "/", expect: (a) => staff(a, "ok") },
   { file: "routes/account.tsx", method: "loader", path: () => "/account", expect: (a) => staff(a, "ok") },
+  { file: "routes/account.tsx", method: "action", path: () => "/account", form: {}, expect: (a) => staff(a, "bad-request") },
   { file: "routes/members.tsx", method: "loader", path: () => "/members", expect: (a) => ownerOnly(a, "ok") },
   // An empty post passes the guard only for owners, who then get the validation error.
   { file: "routes/members.tsx", method: "action", path: () => "/members", form: {}, expect: (a) => ownerOnly(a, "bad-request") },
