@@ -1,14 +1,16 @@
 /**
  * Bundle the TypeScript engine and its command line with esbuild into
- * build/engine/ (git-ignored) when the bundle is missing or older than any
- * source — a cheap mtime check, so `npm run evaluate` never pays for tsx.
+ * node_modules/.cache/isotrope-engine/ (git-ignored) when the bundle is missing
+ * or older than any source — a cheap mtime check, so `npm run evaluate` never
+ * pays for tsx. Not build/: `react-router build` empties build/ and would pull
+ * the bundle from under a running command line.
  */
 import { existsSync, mkdirSync, readdirSync, renameSync, rmSync, statSync } from "node:fs";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
 
 export const ROOT = join(dirname(fileURLToPath(import.meta.url)), "..");
-export const OUT_DIR = join(ROOT, "build", "engine");
+export const OUT_DIR = join(ROOT, "node_modules", ".cache", "isotrope-engine");
 export const CLI_BUNDLE = join(OUT_DIR, "engine-cli.mjs");
 export const LIB_BUNDLE = join(OUT_DIR, "engine-lib.mjs");
 const ENTRIES = {
@@ -38,7 +40,7 @@ export function isStale() {
 export async function ensureBuilt() {
   if (!isStale()) return false;
   const { build } = await import("esbuild");
-  const tmp = join(ROOT, "build", `engine-tmp-${process.pid}-${Date.now()}`);
+  const tmp = join(OUT_DIR, "..", `isotrope-engine-tmp-${process.pid}-${Date.now()}`);
   mkdirSync(tmp, { recursive: true });
   try {
     await build({

@@ -13,6 +13,7 @@
  */
 import { absAtan2, atanPos, expNeg } from "./fastmath";
 import {
+  N_VTABLE,
   patternAttenuationDb,
   PATTERN_3GPP,
   PATTERN_ISOTROPIC,
@@ -177,7 +178,10 @@ export function accumulateRow(
   const kV = cV * DB_TO_NEPER;
   const gMin = expNeg(-am * DB_TO_NEPER);
   const vt = p.vTable;
-  const useTable = vt.length > 0;
+  const ht = p.hTable;
+  const hCmin = p.hCmin;
+  const hInv = p.hInvStep;
+  const useTables = vt.length > 0 && ht.length > 0;
   const vTmax = p.vTmax;
   const vInv = p.vInvStep;
   const gSla = p.gSla;
@@ -199,13 +203,17 @@ export function accumulateRow(
         }
         continue;
       }
-      const phi = absAtan2(s, f);
-      let ah = cH * phi * phi;
-      if (ah > am) ah = am;
       const invRh = rh > 0 ? 1 / rh : 1e300;
-      if (useTable) {
-        // g = max(g_H·G(t), g_min): A = min(min(A_H, A_max) + min(A_V, SLA_V), A_max) in gain form.
-        const gh = expNeg(-ah * DB_TO_NEPER);
+      if (useTables) {
+        // g = max(H(cos φ)·V(tan θ), g_min): A = min(min(A_H, A_max) + min(A_V, SLA_V), A_max) in gain form.
+        let gh = 1;
+        if (rh > 0) {
+          let w = (f * invRh - hCmin) * hInv;
+          if (w > N_VTABLE) w = N_VTABLE;
+          const i0 = w | 0;
+          const h0 = ht[i0];
+          gh = h0 + (w - i0) * (ht[i0 + 1] - h0);
+        }
         for (let k = 0; k < nz; k++) {
           const dz = dzs[k];
           let r2 = rh2 + dz2s[k];
@@ -225,6 +233,9 @@ export function accumulateRow(
         }
         continue;
       }
+      const phi = absAtan2(s, f);
+      let ah = cH * phi * phi;
+      if (ah > am) ah = am;
       // The vertical term at which the total stops growing (SLA_V or the A_max cap).
       let capV = am - ah;
       if (capV > sla) capV = sla;
@@ -265,11 +276,18 @@ export function accumulateRow(
         continue;
       }
       const u = fs + dz * cosT;
-      const phi = absAtan2(s, f2);
-      let ah = cH * phi * phi;
-      if (ah > am) ah = am;
-      if (useTable) {
-        const t = (u < 0 ? -u : u) / (rho > 0 ? rho : 1e-300);
+      if (useTables) {
+        let gh = 1;
+        let t = u === 0 ? 0 : Infinity; // on the antenna's own vertical axis (ρ = 0), as atan2 would give
+        if (rho > 0) {
+          const inv = 1 / rho;
+          let w = (f2 * inv - hCmin) * hInv;
+          if (w > N_VTABLE) w = N_VTABLE;
+          const i0 = w | 0;
+          const h0 = ht[i0];
+          gh = h0 + (w - i0) * (ht[i0 + 1] - h0);
+          t = (u < 0 ? -u : u) * inv;
+        }
         let gv: number;
         if (t >= vTmax) gv = gSla;
         else {
@@ -278,11 +296,14 @@ export function accumulateRow(
           const a0 = vt[i0];
           gv = a0 + (w - i0) * (vt[i0 + 1] - a0);
         }
-        let g = expNeg(-ah * DB_TO_NEPER) * gv;
+        let g = gh * gv;
         if (g < gMin) g = gMin;
         acc[base + k] += (kSph * g) / r2;
         continue;
       }
+      const phi = absAtan2(s, f2);
+      let ah = cH * phi * phi;
+      if (ah > am) ah = am;
       const th = absAtan2(u, rho);
       let av = cV * th * th;
       if (av > sla) av = sla;

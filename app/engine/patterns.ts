@@ -57,6 +57,15 @@ export interface PreparedPattern {
   vTmax: number;
   vInvStep: number;
   gSla: number;
+  /**
+   * 3GPP horizontal gain table H(c) = 10^(−12·acos(c)²/φ3²/10) on
+   * c = cos φ ∈ [hCmin, 1], hCmin = cos φ_cap (φ_cap where 12(φ/φ3)² = A_max), at
+   * N_VTABLE intervals; acos(c)² is smooth at c = 1, so linear interpolation is
+   * accurate (< 4·10⁻⁷). Empty when φ_cap ≥ 170° (the kernel then uses atan).
+   */
+  hTable: Float64Array;
+  hCmin: number;
+  hInvStep: number;
   /** Tabulated cuts, sorted on [0, 360) degrees, wrapped. */
   hAng: Float64Array;
   hAtt: Float64Array;
@@ -87,6 +96,9 @@ function blank(kind: number): PreparedPattern {
     vTmax: 0,
     vInvStep: 0,
     gSla: 0,
+    hTable: EMPTY,
+    hCmin: 1,
+    hInvStep: 0,
     hAng: EMPTY,
     hAtt: EMPTY,
     vAng: EMPTY,
@@ -111,6 +123,25 @@ function verticalTable(cV: number, sla: number, tMax: number): Float64Array {
     }
     if (vTables.size > 64) vTables.clear();
     vTables.set(key, t);
+  }
+  return t;
+}
+
+const hTables = new Map<string, Float64Array>();
+
+/** Memoised 3GPP horizontal gain table (see PreparedPattern.hTable); depends only on (12/φ3², cos φ_cap). */
+function horizontalTable(cH: number, cMin: number): Float64Array {
+  const key = `${cH}|${cMin}`;
+  let t = hTables.get(key);
+  if (!t) {
+    t = new Float64Array(N_VTABLE + 2);
+    for (let i = 0; i < t.length; i++) {
+      const c = Math.min(1, cMin + (i * (1 - cMin)) / N_VTABLE);
+      const phi = Math.acos(c);
+      t[i] = 10 ** (-(cH * phi * phi) / 10);
+    }
+    if (hTables.size > 64) hTables.clear();
+    hTables.set(key, t);
   }
   return t;
 }
@@ -144,10 +175,16 @@ export function preparePattern(spec: PatternSpec | undefined): PreparedPattern {
     p.sla = spec.sideLobeDb ?? 30;
     p.gSla = 10 ** (-p.sla / 10);
     const thSla = Math.sqrt(p.sla / p.cV);
-    if (thSla < 80 * RAD) {
+    if (thSla > 1e-6 && thSla < 80 * RAD) {
       p.vTmax = Math.tan(thSla);
       p.vInvStep = N_VTABLE / p.vTmax;
       p.vTable = verticalTable(p.cV, p.sla, p.vTmax);
+    }
+    const phiCap = Math.sqrt(p.am / p.cH);
+    if (phiCap > 1e-6 && phiCap < 170 * RAD) {
+      p.hCmin = Math.cos(phiCap);
+      p.hInvStep = N_VTABLE / (1 - p.hCmin);
+      p.hTable = horizontalTable(p.cH, p.hCmin);
     }
     return p;
   }
