@@ -187,4 +187,26 @@ describe("models in the grid", () => {
     expect(a.contributions[0].powerDensityWm2).toBeCloseTo(100 / (2 * Math.PI * 9.999 * 2), 9);
     expect(b.contributions[0].powerDensityWm2).toBeCloseTo(1000 / (4 * Math.PI * 10.001 ** 2), 9);
   });
+  it("auto never steps down across R*, off boresight included (the conservative choice in the transition)", () => {
+    const e = {
+      id: "s",
+      frequencyMHz: 1900,
+      powerW: 100,
+      gainDbi: 15,
+      position: { x: 0, y: 0, z: 0 },
+      azimuthDeg: 0,
+      pattern: { type: "3gpp-38.901" as const, hBeamwidthDeg: 65, vBeamwidthDeg: 8 },
+      model: "auto" as const,
+      apertureM: 2,
+    };
+    // R* = G·θ·h/720 = 31.62·65·2/720 = 5.710 m.
+    const rStar = (10 ** 1.5 * 65 * 2) / 720;
+    for (const deg of [0, 20, 45, 80]) {
+      const c = Math.cos((deg * Math.PI) / 180);
+      const s = Math.sin((deg * Math.PI) / 180);
+      const pts = [rStar * (1 - 1e-6), rStar * (1 + 1e-6)].map((r) => ({ x: r * s, y: r * c, z: 0.3 }));
+      const [inside, outside] = evaluate({ standard: "fcc", tier: "general", emitters: [e], points: pts }).points!;
+      expect(outside.totalPercent).toBeGreaterThanOrEqual(inside.totalPercent * (1 - 1e-5));
+    }
+  });
 });
