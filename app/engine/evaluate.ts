@@ -4,6 +4,7 @@
  * worker threads (scripts/engine-cli.ts) and passes the finished grid in.
  */
 import { EngineInputError } from "./errors";
+import { fccMpeExemption } from "./exemption";
 import { gridAxes, gridMaximum, polygonMask, type GridAxes } from "./axes";
 import { classifyCells, gridContours } from "./grid";
 import { accumulateRow, percentAt, rowScratch, type PreparedEmitter } from "./kernel";
@@ -120,6 +121,19 @@ export function evaluateParsed(req: EvaluationRequest, gridPercent?: Float64Arra
       complianceDistanceM: complianceDistanceM(main.prepared[e]),
     })),
   };
+  if (req.screening) {
+    const d = req.screening.distanceM;
+    response.emitters.forEach((em, i) => {
+      const e = req.emitters[i];
+      try {
+        // Time-averaged ERP (duty factor applied), as the rule's "maximum time-averaged ERP".
+        em.exemption = fccMpeExemption({ frequencyMHz: e.frequencyMHz, erpW: em.erpW * e.dutyFactor, distanceM: d });
+      } catch (err) {
+        if (err instanceof EngineInputError) throw new EngineInputError(`emitters[${i}].frequencyMHz`, err.message);
+        throw err;
+      }
+    });
+  }
   if (req.points) {
     response.points = req.points.map((pt) => ({ ...pt, ...evaluatePoint(main, pt.x, pt.y, pt.z) }));
   }

@@ -8,6 +8,7 @@
 import { describe, expect, it } from "vitest";
 import { EngineInputError } from "./errors";
 import { exemptionMinDistanceM, fccExemptionThresholdErpW, fccMpeExemption } from "./exemption";
+import { evaluate } from "./evaluate";
 import { limitAt } from "./limits";
 
 describe("§1.1307(b)(3)(i)(C) threshold ERP", () => {
@@ -61,5 +62,27 @@ describe("screening a single source", () => {
   });
   it("rejects a non-positive distance", () => {
     expect(() => fccMpeExemption({ frequencyMHz: 10, erpW: 1, distanceM: 0 })).toThrow(EngineInputError);
+  });
+});
+
+describe("screening in a request", () => {
+  it("screens each emitter alone at the given distance, with its time-averaged ERP", () => {
+    const r = evaluate({
+      standard: "fcc",
+      tier: "general",
+      emitters: [
+        { id: "a", frequencyMHz: 1900, powerW: 100, gainDbi: 2.15, position: { x: 0, y: 0, z: 0 } },
+        { id: "b", frequencyMHz: 100, powerW: 1000, gainDbi: 2.15, dutyFactor: 0.5, position: { x: 0, y: 0, z: 0 } },
+      ],
+      points: [{ x: 1, y: 0, z: 0 }],
+      screening: { distanceM: 5 },
+    });
+    const [a, b] = r.emitters.map((e) => e.exemption!);
+    expect(a.erpW).toBeCloseTo(100, 9); // 2.15 dBi: ERP = P
+    expect(a.thresholdErpW).toBeCloseTo(480, 9);
+    expect(a.exempt).toBe(true);
+    expect(b.erpW).toBeCloseTo(500, 9);
+    expect(b.thresholdErpW).toBeCloseTo(3.83 * 25, 9);
+    expect(b.exempt).toBe(false);
   });
 });

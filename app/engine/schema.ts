@@ -126,6 +126,8 @@ export const requestSchema = z
     points: z.optional(z.array(pointSchema).check(z.maxLength(MAX_POINTS))),
     grid: z.optional(gridSchema),
     workArea: z.optional(workAreaSchema),
+    /** FCC §1.1307(b)(3)(i)(C) screening of each emitter alone at this separation distance (m). */
+    screening: z.optional(z.strictObject({ distanceM: z.number().check(z.gt(0)) })),
   })
   .check(
     z.superRefine((r, ctx) => {
@@ -192,6 +194,18 @@ export const responseSchema = z.object({
       limit: limitOut,
       model: z.string(),
       complianceDistanceM: z.number(),
+      exemption: z.optional(
+        z.object({
+          frequencyMHz: z.number(),
+          distanceM: z.number(),
+          erpW: z.number(),
+          thresholdErpW: z.number(),
+          minDistanceM: z.number(),
+          applicable: z.boolean(),
+          exempt: z.boolean(),
+          reason: z.string(),
+        }),
+      ),
     }),
   ),
   points: z.optional(
