@@ -16,7 +16,7 @@ export type PatternSpec =
       maxAttenuationDb?: number;
       sideLobeDb?: number;
     }
-  | { type: "itu-r-f.1336-sectoral"; hBeamwidthDeg: number; vBeamwidthDeg: number; k?: number }
+  | { type: "itu-r-f.1336-sectoral"; hBeamwidthDeg: number; vBeamwidthDeg: number; kH?: number; kV?: number; kP?: number }
   | {
       type: "tabulated";
       horizontal: { angleDeg: number; attenuationDb: number }[];
@@ -40,8 +40,9 @@ export interface PreparedPattern {
   cV: number;
   am: number;
   sla: number;
-  /** F.1336 constants (see f1336Attenuation). */
-  k: number;
+  /** F.1336 constants (see attenuationF1336): k_h, k_v. */
+  kH: number;
+  kV: number;
   xk: number;
   lambdaKh: number;
   lambdaKv: number;
@@ -85,7 +86,8 @@ function blank(kind: number): PreparedPattern {
     cV: 0,
     am: Infinity,
     sla: Infinity,
-    k: 0,
+    kH: 0,
+    kV: 0,
     xk: 0,
     lambdaKh: 0,
     lambdaKv: 0,
@@ -192,17 +194,22 @@ export function preparePattern(spec: PatternSpec | undefined): PreparedPattern {
     const p = blank(PATTERN_F1336);
     const phi3 = spec.hBeamwidthDeg;
     const th3 = spec.vBeamwidthDeg;
-    const k = spec.k ?? 0.7;
+    // Rec. ITU-R F.1336-5 recommends 3.1.1 (peak side lobes, 0.4–6 GHz); defaults are the
+    // "typical" antenna values k_h = 0.8, k_v = 0.7, k_p = 0.7 (from memory, agreeing with a
+    // third-party transcription of the Recommendation).
+    const kH = spec.kH ?? 0.8;
+    const kV = spec.kV ?? 0.7;
+    const kP = spec.kP ?? 0.7;
     p.h3 = phi3 * RAD;
     p.v3 = th3 * RAD;
-    p.k = k;
-    // Rec. ITU-R F.1336-5 §3.1 (peak side-lobe sectoral pattern) — from memory.
-    p.xk = Math.sqrt(1 - 0.36 * k);
-    p.lambdaKh = 3 * (1 - 0.5 ** -k);
-    p.g180 = -12 + 10 * Math.log10(1 + 8 * k) - 15 * Math.log10(180 / th3);
-    p.cC =
-      (10 * Math.log10(((180 / th3) ** 1.5 * (4 ** -1.5 + k)) / (1 + 8 * k))) / Math.log10(22.5 / th3);
-    p.lambdaKv = 12 - p.cC * Math.log10(4) - 10 * Math.log10(4 ** -1.5 + k);
+    p.kH = kH;
+    p.kV = kV;
+    p.xk = Math.sqrt(1 - 0.36 * kV);
+    p.lambdaKh = 3 * (1 - 0.5 ** -kH);
+    p.g180 = -12 + 10 * Math.log10(1 + 8 * kP) - 15 * Math.log10(180 / th3);
+    // Attenuation incline factor C; the factor 10 makes G_vr continuous at x_v = 90/θ3, where it meets G180.
+    p.cC = (10 * Math.log10(((180 / th3) ** 1.5 * (4 ** -1.5 + kV)) / (1 + 8 * kP))) / Math.log10(22.5 / th3);
+    p.lambdaKv = 12 - p.cC * Math.log10(4) - 10 * Math.log10(4 ** -1.5 + kV);
     p.ghrBack = f1336Ghr(p, 180 / phi3);
     return p;
   }
@@ -230,7 +237,7 @@ export function attenuation3gpp(p: PreparedPattern, phi: number, theta: number):
 
 /** F.1336-5 horizontal relative gain G_hr(x_h), dB (≤ 0), floored at G180. */
 function f1336Ghr(p: PreparedPattern, xh: number): number {
-  const g = xh <= 0.5 ? -12 * xh * xh : -12 * xh ** (2 - p.k) - p.lambdaKh;
+  const g = xh <= 0.5 ? -12 * xh * xh : -12 * xh ** (2 - p.kH) - p.lambdaKh;
   return g < p.g180 ? p.g180 : g;
 }
 
@@ -238,8 +245,9 @@ function f1336Ghr(p: PreparedPattern, xh: number): number {
 function f1336Gvr(p: PreparedPattern, xv: number): number {
   let g: number;
   if (xv < p.xk) g = -12 * xv * xv;
-  else if (xv < 4) g = -12 + 10 * Math.log10(xv ** -1.5 + p.k);
-  else g = -p.lambdaKv - p.cC * Math.log10(xv);
+  else if (xv < 4) g = -12 + 10 * Math.log10(xv ** -1.5 + p.kV);
+  else if (xv < 90 / (p.v3 / RAD)) g = -p.lambdaKv - p.cC * Math.log10(xv);
+  else g = p.g180;
   return g < p.g180 ? p.g180 : g;
 }
 

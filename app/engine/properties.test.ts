@@ -24,7 +24,9 @@ const pattern = fc.oneof(
     type: fc.constant("itu-r-f.1336-sectoral" as const),
     hBeamwidthDeg: fc.double({ min: 10, max: 180, noNaN: true }),
     vBeamwidthDeg: fc.double({ min: 2, max: 45, noNaN: true }),
-    k: fc.double({ min: 0, max: 1, noNaN: true }),
+    kH: fc.double({ min: 0, max: 1, noNaN: true }),
+    kV: fc.double({ min: 0, max: 1, noNaN: true }),
+    kP: fc.double({ min: 0, max: 1, noNaN: true }),
   }),
   fc.record({
     type: fc.constant("tabulated" as const),

@@ -33,7 +33,9 @@ export const patternSchema = z.union([
     type: z.literal("itu-r-f.1336-sectoral"),
     hBeamwidthDeg: openRange(0, 180),
     vBeamwidthDeg: openRange(0, 90),
-    k: z._default(range(0, 1), 0.7),
+    kH: z.optional(range(0, 1)),
+    kV: z.optional(range(0, 1)),
+    kP: z.optional(range(0, 1)),
   }),
   z.strictObject({
     type: z.literal("tabulated"),
