@@ -11,9 +11,9 @@
  *   φ = atan2(s, f₂),                     θ = atan2(u, √(f₂² + s²)),
  * so a point on the tilted boresight (f = R·cos t, dz = −R·sin t) has u = 0.
  */
-import { absAtan2, atanPos, expNeg } from "./fastmath";
+import { absAtan2, expNeg } from "./fastmath";
 import {
-  N_VTABLE,
+  N_TABLE,
   patternAttenuationDb,
   PATTERN_3GPP,
   PATTERN_ISOTROPIC,
@@ -171,100 +171,116 @@ export function accumulateRow(
   const sla = p.sla;
   const sinAz = pe.sinAz;
   const cosAz = pe.cosAz;
-  const cMin = kSph * expNeg(-am * DB_TO_NEPER);
+  const kV = cV * DB_TO_NEPER;
+  const gMin = expNeg(-am * DB_TO_NEPER);
+  const cMin = kSph * gMin;
   // |φ| ≥ φ_cap ⇔ 12(φ/φ3)² ≥ A_max: the horizontal term alone reaches the cap.
   const phiCap = Math.sqrt(am / cH);
   const cosPhiCap = phiCap >= Math.PI ? -2 : Math.cos(phiCap);
-  const kV = cV * DB_TO_NEPER;
-  const gMin = expNeg(-am * DB_TO_NEPER);
   const vt = p.vTable;
   const ht = p.hTable;
-  const hCmin = p.hCmin;
-  const hInv = p.hInvStep;
-  const useTables = vt.length > 0 && ht.length > 0;
-  const vTmax = p.vTmax;
+  const tauMax = p.vTauMax;
   const vInv = p.vInvStep;
   const gSla = p.gSla;
-  if (pe.sinT === 0) {
-    // Tilt 0: φ and the horizontal distance do not depend on height.
-    for (let i = 0; i < nx; i++) {
-      if (mask !== null && mask[maskOffset + i] === 0) continue;
-      const dx = xs[i] - pe.x;
-      const f = dx * sinAz + dy * cosAz;
-      const s = dx * cosAz - dy * sinAz;
-      const rh2 = dx * dx + dyy;
-      const rh = Math.sqrt(rh2);
-      const base = i * nz;
-      if (f < rh * cosPhiCap) {
-        for (let k = 0; k < nz; k++) {
-          let r2 = rh2 + dz2s[k];
-          if (r2 < R2_MIN) r2 = R2_MIN;
-          acc[base + k] += cMin / r2;
-        }
-        continue;
-      }
-      const invRh = rh > 0 ? 1 / rh : 1e300;
-      if (useTables) {
-        // g = max(H(cos φ)·V(tan θ), g_min): A = min(min(A_H, A_max) + min(A_V, SLA_V), A_max) in gain form.
-        let gh = 1;
-        if (rh > 0) {
-          let w = (f * invRh - hCmin) * hInv;
-          if (w > N_VTABLE) w = N_VTABLE;
-          const i0 = w | 0;
-          const h0 = ht[i0];
-          gh = h0 + (w - i0) * (ht[i0 + 1] - h0);
-        }
-        for (let k = 0; k < nz; k++) {
-          const dz = dzs[k];
-          let r2 = rh2 + dz2s[k];
-          if (r2 < R2_MIN) r2 = R2_MIN;
-          const t = (dz < 0 ? -dz : dz) * invRh;
-          let gv: number;
-          if (t >= vTmax) gv = gSla;
-          else {
-            const u = t * vInv;
-            const i0 = u | 0;
-            const a0 = vt[i0];
-            gv = a0 + (u - i0) * (vt[i0 + 1] - a0);
-          }
-          let g = gh * gv;
-          if (g < gMin) g = gMin;
-          acc[base + k] += (kSph * g) / r2;
-        }
-        continue;
-      }
-      const phi = absAtan2(s, f);
-      let ah = cH * phi * phi;
-      if (ah > am) ah = am;
-      // The vertical term at which the total stops growing (SLA_V or the A_max cap).
-      let capV = am - ah;
-      if (capV > sla) capV = sla;
-      const th2Cap = capV / cV;
-      const cCap = kSph * expNeg(-(ah + capV) * DB_TO_NEPER);
-      const cH0 = kSph * expNeg(-ah * DB_TO_NEPER);
-      for (let k = 0; k < nz; k++) {
-        const dz = dzs[k];
-        let r2 = rh2 + dz2s[k];
-        if (r2 < R2_MIN) r2 = R2_MIN;
-        const th = atanPos((dz < 0 ? -dz : dz) * invRh);
-        const th2 = th * th;
-        acc[base + k] += (th2 >= th2Cap ? cCap : cH0 * expNeg(-kV * th2)) / r2;
-      }
-    }
-    return;
-  }
+  const cLo = p.hCmin;
+  const hInv = p.hInvStep;
+  const useTables = vt.length > 0 && ht.length > 0;
   const sinT = pe.sinT;
   const cosT = pe.cosT;
+  const tilted = sinT !== 0;
   for (let i = 0; i < nx; i++) {
     if (mask !== null && mask[maskOffset + i] === 0) continue;
     const dx = xs[i] - pe.x;
     const f = dx * sinAz + dy * cosAz;
     const s = dx * cosAz - dy * sinAz;
-    const ss = s * s;
     const rh2 = dx * dx + dyy;
+    const base = i * nz;
+    if (useTables) {
+      if (!tilted) {
+        // Tilt 0: φ and the horizontal distance do not depend on height.
+        // g = max(H(w)·V(τ), g_min) is A = min(min(A_H, A_max) + min(A_V, SLA_V), A_max) in gain form.
+        const rh = Math.sqrt(rh2);
+        const irh2 = rh2 > 0 ? 1 / rh2 : 0;
+        const cphi = rh2 > 0 ? f / rh : 1;
+        if (cphi < cLo) {
+          for (let k = 0; k < nz; k++) {
+            let r2 = rh2 + dz2s[k];
+            if (r2 < R2_MIN) r2 = R2_MIN;
+            acc[base + k] += cMin / r2;
+          }
+          continue;
+        }
+        let x = (cphi - cLo) * hInv;
+        if (x > N_TABLE) x = N_TABLE;
+        const ih = x | 0;
+        const kh = kSph * (ht[ih] + (x - ih) * (ht[ih + 1] - ht[ih]));
+        const kMin = cMin;
+        for (let k = 0; k < nz; k++) {
+          const dz2 = dz2s[k];
+          let r2 = rh2 + dz2;
+          if (r2 < R2_MIN) r2 = R2_MIN;
+          // τ = tan²θ = dz²/R_h²; on the vertical axis (R_h = 0) θ = ±90° unless dz = 0 too.
+          const tau = rh2 > 0 ? dz2 * irh2 : dz2 > 0 ? Infinity : 0;
+          let c: number;
+          if (tau >= tauMax) c = kh * gSla;
+          else {
+            const y = tau * vInv;
+            const iv = y | 0;
+            c = kh * (vt[iv] + (y - iv) * (vt[iv + 1] - vt[iv]));
+          }
+          acc[base + k] += (c < kMin ? kMin : c) / r2;
+        }
+        continue;
+      }
+      const ss = s * s;
+      const fc = f * cosT;
+      const fs = f * sinT;
+      for (let k = 0; k < nz; k++) {
+        const dz = dzs[k];
+        let r2 = rh2 + dz2s[k];
+        if (r2 < R2_MIN) r2 = R2_MIN;
+        const f2 = fc - dz * sinT;
+        const u = fs + dz * cosT;
+        const rho2 = f2 * f2 + ss;
+        let g: number;
+        if (rho2 > 0) {
+          // One division gives both 1/ρ and 1/R².
+          const rho = Math.sqrt(rho2);
+          const inv = 1 / (rho * r2);
+          const irho = inv * r2;
+          const cphi = f2 * irho;
+          if (cphi < cLo) {
+            acc[base + k] += cMin * inv * rho;
+            continue;
+          }
+          let x = (cphi - cLo) * hInv;
+          if (x > N_TABLE) x = N_TABLE;
+          const ih = x | 0;
+          const gh = ht[ih] + (x - ih) * (ht[ih + 1] - ht[ih]);
+          const tu = u * irho;
+          const tau = tu * tu;
+          let gv: number;
+          if (tau >= tauMax) gv = gSla;
+          else {
+            const y = tau * vInv;
+            const iv = y | 0;
+            gv = vt[iv] + (y - iv) * (vt[iv + 1] - vt[iv]);
+          }
+          g = gh * gv;
+          if (g < gMin) g = gMin;
+          acc[base + k] += kSph * g * inv * rho;
+          continue;
+        }
+        // On the antenna's own vertical axis (ρ = 0): φ = 0, θ = ±90° (or 0 at the antenna itself).
+        g = u === 0 ? 1 : gSla;
+        acc[base + k] += (kSph * (g < gMin ? gMin : g)) / r2;
+      }
+      continue;
+    }
+    // Fallback (very wide beams): atan and exp per sample.
+    const ss = s * s;
     const fc = f * cosT;
     const fs = f * sinT;
-    const base = i * nz;
     for (let k = 0; k < nz; k++) {
       const dz = dzs[k];
       let r2 = rh2 + dz2s[k];
@@ -276,40 +292,15 @@ export function accumulateRow(
         continue;
       }
       const u = fs + dz * cosT;
-      if (useTables) {
-        let gh = 1;
-        let t = u === 0 ? 0 : Infinity; // on the antenna's own vertical axis (ρ = 0), as atan2 would give
-        if (rho > 0) {
-          const inv = 1 / rho;
-          let w = (f2 * inv - hCmin) * hInv;
-          if (w > N_VTABLE) w = N_VTABLE;
-          const i0 = w | 0;
-          const h0 = ht[i0];
-          gh = h0 + (w - i0) * (ht[i0 + 1] - h0);
-          t = (u < 0 ? -u : u) * inv;
-        }
-        let gv: number;
-        if (t >= vTmax) gv = gSla;
-        else {
-          const w = t * vInv;
-          const i0 = w | 0;
-          const a0 = vt[i0];
-          gv = a0 + (w - i0) * (vt[i0 + 1] - a0);
-        }
-        let g = gh * gv;
-        if (g < gMin) g = gMin;
-        acc[base + k] += (kSph * g) / r2;
-        continue;
-      }
       const phi = absAtan2(s, f2);
+      const th = absAtan2(u, rho);
       let ah = cH * phi * phi;
       if (ah > am) ah = am;
-      const th = absAtan2(u, rho);
-      let av = cV * th * th;
-      if (av > sla) av = sla;
-      let a = ah + av;
-      if (a > am) a = am;
-      acc[base + k] += (kSph * expNeg(-a * DB_TO_NEPER)) / r2;
+      let av = kV * th * th;
+      if (av > sla * DB_TO_NEPER) av = sla * DB_TO_NEPER;
+      let a = ah * DB_TO_NEPER + av;
+      if (a > am * DB_TO_NEPER) a = am * DB_TO_NEPER;
+      acc[base + k] += (kSph * expNeg(-a)) / r2;
     }
   }
 }

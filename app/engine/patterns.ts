@@ -50,20 +50,17 @@ export interface PreparedPattern {
   g180: number;
   ghrBack: number;
   /**
-   * 3GPP vertical gain table G(t) = max(10^(−min(12(θ/θ3)², SLA_V)/10)) with
-   * θ = atan t, on t ∈ [0, vTmax] at N_VTABLE intervals (linear interpolation,
-   * relative error < 4·10⁻⁷); G = gSla beyond. Empty when θ_SLA ≥ 80°.
+   * 3GPP gain tables in squared variables, so the kernel needs neither sqrt nor
+   * atan nor exp (linear interpolation on N_TABLE intervals, relative error < 10⁻⁶):
+   * vertical V(τ) = max(10^(−12·atan(√τ)²/θ3²/10), 10^(−SLA_V/10)), τ = tan²θ ∈ [0, vTauMax];
+   * horizontal H(c) = 10^(−12·acos(c)²/φ3²/10), c = cos φ ∈ [hCmin, 1], hCmin = cos φ_cap
+   * (12(φ_cap/φ3)² = A_max); acos(c)² is smooth on it (singular only at c = −1).
+   * Empty when θ_SLA ≥ 80° or φ_cap ≥ 170° (the kernel then uses atan and exp).
    */
   vTable: Float64Array;
-  vTmax: number;
+  vTauMax: number;
   vInvStep: number;
   gSla: number;
-  /**
-   * 3GPP horizontal gain table H(c) = 10^(−12·acos(c)²/φ3²/10) on
-   * c = cos φ ∈ [hCmin, 1], hCmin = cos φ_cap (φ_cap where 12(φ/φ3)² = A_max), at
-   * N_VTABLE intervals; acos(c)² is smooth at c = 1, so linear interpolation is
-   * accurate (< 4·10⁻⁷). Empty when φ_cap ≥ 170° (the kernel then uses atan).
-   */
   hTable: Float64Array;
   hCmin: number;
   hInvStep: number;
@@ -95,7 +92,7 @@ function blank(kind: number): PreparedPattern {
     g180: 0,
     ghrBack: 0,
     vTable: EMPTY,
-    vTmax: 0,
+    vTauMax: 0,
     vInvStep: 0,
     gSla: 0,
     hTable: EMPTY,
@@ -108,18 +105,19 @@ function blank(kind: number): PreparedPattern {
   };
 }
 
-export const N_VTABLE = 8192;
+export const N_TABLE = 8192;
 const vTables = new Map<string, Float64Array>();
+const hTables = new Map<string, Float64Array>();
 
-/** Memoised 3GPP vertical gain table (see PreparedPattern.vTable); depends only on (12/θ3², SLA_V). */
-function verticalTable(cV: number, sla: number, tMax: number): Float64Array {
+/** Memoised vertical table V(τ) (see PreparedPattern.vTable); depends only on (12/θ3², SLA_V). */
+function verticalTable(cV: number, sla: number, tauMax: number): Float64Array {
   const key = `${cV}|${sla}`;
   let t = vTables.get(key);
   if (!t) {
-    t = new Float64Array(N_VTABLE + 2);
+    t = new Float64Array(N_TABLE + 2);
     const gSla = 10 ** (-sla / 10);
     for (let i = 0; i < t.length; i++) {
-      const th = Math.atan((i * tMax) / N_VTABLE);
+      const th = Math.atan(Math.sqrt((i * tauMax) / N_TABLE));
       const g = 10 ** (-(cV * th * th) / 10);
       t[i] = g > gSla ? g : gSla;
     }
@@ -129,17 +127,14 @@ function verticalTable(cV: number, sla: number, tMax: number): Float64Array {
   return t;
 }
 
-const hTables = new Map<string, Float64Array>();
-
-/** Memoised 3GPP horizontal gain table (see PreparedPattern.hTable); depends only on (12/φ3², cos φ_cap). */
+/** Memoised horizontal table H(c) (see PreparedPattern.hTable); depends only on (12/φ3², c_min). */
 function horizontalTable(cH: number, cMin: number): Float64Array {
   const key = `${cH}|${cMin}`;
   let t = hTables.get(key);
   if (!t) {
-    t = new Float64Array(N_VTABLE + 2);
+    t = new Float64Array(N_TABLE + 2);
     for (let i = 0; i < t.length; i++) {
-      const c = Math.min(1, cMin + (i * (1 - cMin)) / N_VTABLE);
-      const phi = Math.acos(c);
+      const phi = Math.acos(Math.min(1, cMin + (i * (1 - cMin)) / N_TABLE));
       t[i] = 10 ** (-(cH * phi * phi) / 10);
     }
     if (hTables.size > 64) hTables.clear();
@@ -178,14 +173,14 @@ export function preparePattern(spec: PatternSpec | undefined): PreparedPattern {
     p.gSla = 10 ** (-p.sla / 10);
     const thSla = Math.sqrt(p.sla / p.cV);
     if (thSla > 1e-6 && thSla < 80 * RAD) {
-      p.vTmax = Math.tan(thSla);
-      p.vInvStep = N_VTABLE / p.vTmax;
-      p.vTable = verticalTable(p.cV, p.sla, p.vTmax);
+      p.vTauMax = Math.tan(thSla) ** 2;
+      p.vInvStep = N_TABLE / p.vTauMax;
+      p.vTable = verticalTable(p.cV, p.sla, p.vTauMax);
     }
     const phiCap = Math.sqrt(p.am / p.cH);
     if (phiCap > 1e-6 && phiCap < 170 * RAD) {
       p.hCmin = Math.cos(phiCap);
-      p.hInvStep = N_VTABLE / (1 - p.hCmin);
+      p.hInvStep = N_TABLE / (1 - p.hCmin);
       p.hTable = horizontalTable(p.cH, p.hCmin);
     }
     return p;
