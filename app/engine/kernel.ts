@@ -199,9 +199,14 @@ export function accumulateRow(
       if (!tilted) {
         // Tilt 0: φ and the horizontal distance do not depend on height.
         // g = max(H(w)·V(τ), g_min) is A = min(min(A_H, A_max) + min(A_V, SLA_V), A_max) in gain form.
+        if (rh2 === 0) {
+          // On the antenna's own vertical axis: the reference path handles the degenerate angles.
+          for (let k = 0; k < nz; k++) acc[base + k] += percentAt(pe, xs[i], y, zs[k]);
+          continue;
+        }
         const rh = Math.sqrt(rh2);
-        const irh2 = rh2 > 0 ? 1 / rh2 : 0;
-        const cphi = rh2 > 0 ? f / rh : 1;
+        const irh2 = 1 / rh2;
+        const cphi = f / rh;
         if (cphi < cLo) {
           for (let k = 0; k < nz; k++) {
             let r2 = rh2 + dz2s[k];
@@ -220,15 +225,11 @@ export function accumulateRow(
           let r2 = rh2 + dz2;
           if (r2 < R2_MIN) r2 = R2_MIN;
           // τ = tan²θ = dz²/R_h²; on the vertical axis (R_h = 0) θ = ±90° unless dz = 0 too.
-          const tau = rh2 > 0 ? dz2 * irh2 : dz2 > 0 ? Infinity : 0;
-          let c: number;
-          if (tau >= tauMax) c = kh * gSla;
-          else {
-            const y = tau * vInv;
-            const iv = y | 0;
-            c = kh * (vt[iv] + (y - iv) * (vt[iv + 1] - vt[iv]));
-          }
-          acc[base + k] += (c < kMin ? kMin : c) / r2;
+          // V(τ_max) = g_SLA, so clamping τ there is exact; min/max keep the loop branch-free.
+          const q = Math.min(dz2 * irh2, tauMax) * vInv;
+          const iv = q | 0;
+          const c = kh * (vt[iv] + (q - iv) * (vt[iv + 1] - vt[iv]));
+          acc[base + k] += Math.max(c, kMin) / r2;
         }
         continue;
       }
