@@ -73,3 +73,5 @@ export default function Account({ loaderData, actionData }: Route.ComponentProps
     </>
   );
 }
+
+export { RouteError as ErrorBoundary } from "~/components/route-error";

@@ -42,3 +42,5 @@ export default function Home({ loaderData }: Route.ComponentProps) {
     </>
   );
 }
+
+export { RouteError as ErrorBoundary } from "~/components/route-error";

@@ -166,3 +166,5 @@ export default function Members({ loaderData }: Route.ComponentProps) {
     </>
   );
 }
+
+export { RouteError as ErrorBoundary } from "~/components/route-error";

@@ -73,3 +73,5 @@ export default function Welcome({ loaderData, actionData }: Route.ComponentProps
     </div>
   );
 }
+
+export { RouteError as ErrorBoundary } from "~/components/route-error";

@@ -1,13 +1,13 @@
 // Sign up, confirm the e-mail through the mail catcher, sign out and in, reset the password.
 import { expect, test } from "@playwright/test";
-import { latestMail, linkIn, shot, unique } from "./helpers";
+import { latestMail, linkIn, shot, unique, visit } from "./helpers";
 
 test("a new consultant signs up, confirms, signs out and in, and resets the password", async ({ page }, info) => {
   const email = unique("consultant");
   const password = "first-Password-42";
   const start = Date.now() - 1000;
 
-  await page.goto("/sign-up");
+  await visit(page, "/sign-up");
   await page.getByLabel("Your name").fill("Nell Example");
   await page.getByLabel("E-mail").fill(email);
   await page.getByLabel("Password", { exact: true }).fill(password);
@@ -18,14 +18,14 @@ test("a new consultant signs up, confirms, signs out and in, and resets the pass
   await expect(page.getByText(email)).toBeVisible();
 
   // Not confirmed yet: sign-in is refused with a clear message.
-  await page.goto("/sign-in");
+  await visit(page, "/sign-in");
   await page.getByLabel("E-mail").fill(email);
   await page.getByLabel("Password").fill(password);
   await page.getByRole("button", { name: "Sign in" }).click();
   await expect(page.getByRole("alert").filter({ hasText: "Confirm your e-mail address first" })).toBeVisible();
 
   const confirm = await latestMail(email, /Confirm your e-mail/, start);
-  await page.goto(linkIn(confirm));
+  await visit(page, linkIn(confirm));
   await expect(page.getByRole("heading", { name: "E-mail confirmed" })).toBeVisible();
   await shot(page, info, "02-confirmed");
 
@@ -50,12 +50,13 @@ test("a new consultant signs up, confirms, signs out and in, and resets the pass
   // Password reset by e-mail; the link works once.
   const resetStart = Date.now() - 1000;
   await page.getByRole("link", { name: "Forgot your password?" }).click();
+  await expect(page.getByRole("heading", { name: "Reset your password" })).toBeVisible();
   await page.getByLabel("E-mail").fill(email);
   await page.getByRole("button", { name: "Send the link" }).click();
   await expect(page.getByText("If that address has an account")).toBeVisible();
   const resetMail = await latestMail(email, /Reset your Isotrope password/, resetStart);
   const resetLink = linkIn(resetMail);
-  await page.goto(resetLink);
+  await visit(page, resetLink);
   await expect(page.getByRole("heading", { name: "Choose a new password" })).toBeVisible();
   const newPassword = "second-Password-77";
   await page.getByLabel("New password", { exact: true }).fill(newPassword);
@@ -64,11 +65,11 @@ test("a new consultant signs up, confirms, signs out and in, and resets the pass
   await page.getByRole("button", { name: "Save the new password" }).click();
   await expect(page.getByText("Your password is changed")).toBeVisible();
 
-  await page.goto(resetLink);
+  await visit(page, resetLink);
   await expect(page.getByRole("heading", { name: "Link not accepted" })).toBeVisible();
   await shot(page, info, "05-reset-link-reused");
 
-  await page.goto("/sign-in");
+  await visit(page, "/sign-in");
   await page.getByLabel("E-mail").fill(email);
   await page.getByLabel("Password").fill(password);
   await page.getByRole("button", { name: "Sign in" }).click();
@@ -79,7 +80,7 @@ test("a new consultant signs up, confirms, signs out and in, and resets the pass
 });
 
 test("sign-up refuses a weak password and a taken e-mail, in place", async ({ page }) => {
-  await page.goto("/sign-up");
+  await visit(page, "/sign-up");
   await page.getByLabel("Your name").fill("Weak Example");
   await page.getByLabel("E-mail").fill(unique("weak"));
   await page.getByLabel("Password", { exact: true }).fill("short");

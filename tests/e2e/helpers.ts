@@ -24,8 +24,15 @@ export function linkIn(mail: Mail): string {
   return url;
 }
 
+/** Opens a page and waits for it to become interactive. */
+export async function visit(page: Page, url: string) {
+  const response = await page.goto(url);
+  await hydrated(page);
+  return response;
+}
+
 export async function signIn(page: Page, email: string, password = demoPassword) {
-  await page.goto("/sign-in");
+  await visit(page, "/sign-in");
   await page.getByLabel("E-mail").fill(email);
   await page.getByLabel("Password").fill(password);
   await page.getByRole("button", { name: "Sign in" }).click();
@@ -39,3 +46,8 @@ export async function shot(page: Page, info: TestInfo, name: string) {
 }
 
 export const unique = (prefix: string) => `${prefix}-${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}@example.test`;
+
+/** Waits until React has hydrated the page, so controls keep what the test sets. */
+export async function hydrated(page: Page) {
+  await page.locator("html[data-hydrated]").waitFor({ state: "attached" });
+}

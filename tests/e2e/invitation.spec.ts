@@ -1,6 +1,6 @@
 // An owner invites a member by e-mail; the invitee signs up through the link and lands in the organisation.
 import { expect, test } from "@playwright/test";
-import { latestMail, linkIn, shot, signIn, unique } from "./helpers";
+import { hydrated, latestMail, linkIn, shot, signIn, unique, visit } from "./helpers";
 
 test("an owner invites a reviewer who accepts and sees the reviewer's view", async ({ browser }, info) => {
   const email = unique("reviewer");
@@ -18,7 +18,7 @@ test("an owner invites a reviewer who accepts and sees the reviewer's view", asy
 
   const mail = await latestMail(email, /Join Kestrel Lane RF Consulting/, start);
   const invitee = await (await browser.newContext()).newPage();
-  await invitee.goto(linkIn(mail));
+  await visit(invitee, linkIn(mail));
   await expect(invitee.getByRole("heading", { name: "Join Kestrel Lane RF Consulting" })).toBeVisible();
   await expect(invitee.getByText("Reviewing engineer")).toBeVisible();
   await invitee.getByLabel("Your name").fill("Rhea Invited");
@@ -32,15 +32,19 @@ test("an owner invites a reviewer who accepts and sees the reviewer's view", asy
   await shot(invitee, info, "03-reviewer-overview");
 
   // The link is spent.
-  await invitee.goto(linkIn(mail));
+  await visit(invitee, linkIn(mail));
   await expect(invitee.getByText("This invitation has already been used.")).toBeVisible();
 
   // The reviewer cannot open the members page.
-  const response = await invitee.goto("/members");
+  const response = await visit(invitee, "/members");
   expect(response?.status()).toBe(403);
+  await expect(invitee.getByText("Your role does not give access to this page.")).toBeVisible();
+  await expect(invitee.getByRole("navigation", { name: "Main" })).toBeVisible();
+  await shot(invitee, info, "04-reviewer-refused-members");
 
   // The owner sees the new member and changes the role.
   await owner.reload();
+  await hydrated(owner);
   const row = owner.getByRole("row").filter({ hasText: email });
   await expect(row).toBeVisible();
   await row.getByLabel(/Role of/).selectOption("engineer");
