@@ -7,12 +7,12 @@ import { responseSchema, type EvaluationRequestInput } from "./schema";
 
 const sector = (h: number, v: number) => ({ type: "3gpp-38.901" as const, hBeamwidthDeg: h, vBeamwidthDeg: v, maxAttenuationDb: 30, sideLobeDb: 30 });
 
-function site(tilt = 0): EvaluationRequestInput {
+function site(tilt = 0, vBw = 7): EvaluationRequestInput {
   return {
     standard: "fcc",
     tier: "general",
     emitters: [
-      { id: "A", frequencyMHz: 1900, powerW: 120, lossDb: 1.5, gainDbi: 15, position: { x: 5, y: 5, z: 1.5 }, azimuthDeg: 60, tiltDeg: tilt, pattern: sector(65, 7) },
+      { id: "A", frequencyMHz: 1900, powerW: 120, lossDb: 1.5, gainDbi: 15, position: { x: 5, y: 5, z: 1.5 }, azimuthDeg: 60, tiltDeg: tilt, pattern: sector(65, vBw) },
       { id: "B", frequencyMHz: 700, powerW: 80, lossDb: 1, gainDbi: 13, position: { x: 15, y: 8, z: 1.2 }, azimuthDeg: 250, tiltDeg: tilt, pattern: sector(65, 10) },
       { id: "C", frequencyMHz: 3500, powerW: 40, gainDbi: 5, position: { x: 10, y: 2, z: 4 } },
     ],
@@ -32,9 +32,9 @@ describe("grid axes (as peer_grid.py: numpy.arange(x0, x1 + 1e-9, step), numpy.l
 });
 
 describe("grid kernel agrees with the point-by-point reference", () => {
-  for (const tilt of [0, 8]) {
-    it(`tilt ${tilt}°: every cell within 1e-6 relative of the mean of percentAt over the heights`, () => {
-      const r = parseRequest(site(tilt));
+  for (const [tilt, vBw] of [[0, 7], [8, 7], [0, 65], [8, 65]]) {
+    it(`tilt ${tilt}°, vertical beamwidth ${vBw}°: every cell within 1e-6 relative of the mean of percentAt over the heights`, () => {
+      const r = parseRequest(site(tilt, vBw));
       if (!r.ok) throw new Error(r.message);
       const res = evaluateParsed(r.request);
       const p = prepareRequest(r.request);

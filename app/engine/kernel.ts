@@ -185,6 +185,8 @@ export function accumulateRow(
   const cLo = p.hCmin;
   const hInv = p.hInvStep;
   const useTables = vt.length > 0 && ht.length > 0;
+  const vct = p.vcTable;
+  const useCosTables = !useTables && vct.length > 0 && ht.length > 0;
   const sinT = pe.sinT;
   const cosT = pe.cosT;
   const tilted = sinT !== 0;
@@ -278,8 +280,43 @@ export function accumulateRow(
       }
       continue;
     }
-    // Fallback (very wide beams): atan and exp per sample.
     const ss = s * s;
+    if (useCosTables) {
+      // Wide vertical beams: V in cos θ = ρ/R (any tilt).
+      const fc = f * cosT;
+      const fs = f * sinT;
+      for (let k = 0; k < nz; k++) {
+        const dz = dzs[k];
+        let r2 = rh2 + dz2s[k];
+        if (r2 < R2_MIN) r2 = R2_MIN;
+        const f2 = fc - dz * sinT;
+        const u = fs + dz * cosT;
+        const rho2 = f2 * f2 + ss;
+        if (rho2 > 0) {
+          const rho = Math.sqrt(rho2);
+          const inv = 1 / (rho * r2);
+          const cphi = f2 * inv * r2;
+          if (cphi < cLo) {
+            acc[base + k] += cMin * inv * rho;
+            continue;
+          }
+          let x = (cphi - cLo) * hInv;
+          if (x > N_TABLE) x = N_TABLE;
+          const ih = x | 0;
+          const gh = ht[ih] + (x - ih) * (ht[ih + 1] - ht[ih]);
+          let ct = rho2 * Math.sqrt(r2) * inv * N_TABLE;
+          if (ct > N_TABLE) ct = N_TABLE;
+          const iv = ct | 0;
+          const gv = vct[iv] + (ct - iv) * (vct[iv + 1] - vct[iv]);
+          acc[base + k] += kSph * Math.max(gh * gv, gMin) * inv * rho;
+          continue;
+        }
+        // On the antenna's own vertical axis (ρ = 0): φ = 0, θ = ±90° (or 0 at the antenna itself).
+        acc[base + k] += (kSph * Math.max(u === 0 ? 1 : vct[0], gMin)) / r2;
+      }
+      continue;
+    }
+    // Fallback (horizontal cap beyond 170°): atan and exp per sample.
     const fc = f * cosT;
     const fs = f * sinT;
     for (let k = 0; k < nz; k++) {

@@ -64,6 +64,11 @@ export interface PreparedPattern {
   hTable: Float64Array;
   hCmin: number;
   hInvStep: number;
+  /**
+   * Vertical table for wide beams (θ_SLA ≥ 80°, where tan²θ is unbounded): V in
+   * c_θ = cos θ = ρ/R ∈ [0, 1], V(c) = max(10^(−12·acos(c)²/θ3²/10), g_SLA) at N_TABLE intervals.
+   */
+  vcTable: Float64Array;
   /** Tabulated cuts, sorted on [0, 360) degrees, wrapped. */
   hAng: Float64Array;
   hAtt: Float64Array;
@@ -98,6 +103,7 @@ function blank(kind: number): PreparedPattern {
     hTable: EMPTY,
     hCmin: 1,
     hInvStep: 0,
+    vcTable: EMPTY,
     hAng: EMPTY,
     hAtt: EMPTY,
     vAng: EMPTY,
@@ -118,6 +124,24 @@ function verticalTable(cV: number, sla: number, tauMax: number): Float64Array {
     const gSla = 10 ** (-sla / 10);
     for (let i = 0; i < t.length; i++) {
       const th = Math.atan(Math.sqrt((i * tauMax) / N_TABLE));
+      const g = 10 ** (-(cV * th * th) / 10);
+      t[i] = g > gSla ? g : gSla;
+    }
+    if (vTables.size > 64) vTables.clear();
+    vTables.set(key, t);
+  }
+  return t;
+}
+
+/** Memoised wide-beam vertical table V(cos θ) (see PreparedPattern.vcTable). */
+function verticalCosTable(cV: number, sla: number): Float64Array {
+  const key = `cos|${cV}|${sla}`;
+  let t = vTables.get(key);
+  if (!t) {
+    t = new Float64Array(N_TABLE + 2);
+    const gSla = 10 ** (-sla / 10);
+    for (let i = 0; i < t.length; i++) {
+      const th = Math.acos(Math.min(1, i / N_TABLE));
       const g = 10 ** (-(cV * th * th) / 10);
       t[i] = g > gSla ? g : gSla;
     }
@@ -176,6 +200,8 @@ export function preparePattern(spec: PatternSpec | undefined): PreparedPattern {
       p.vTauMax = Math.tan(thSla) ** 2;
       p.vInvStep = N_TABLE / p.vTauMax;
       p.vTable = verticalTable(p.cV, p.sla, p.vTauMax);
+    } else if (thSla > 1e-6) {
+      p.vcTable = verticalCosTable(p.cV, p.sla);
     }
     const phiCap = Math.sqrt(p.am / p.cH);
     if (phiCap > 1e-6 && phiCap < 170 * RAD) {
