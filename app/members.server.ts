@@ -123,7 +123,6 @@ export async function removeMember(actor: Actor, memberId: string) {
       throw new DomainError("The organisation needs at least one owner.", 409);
     }
     await tx.delete(member).where(eq(member.id, memberId));
-    await tx.delete(schema.session).where(and(eq(schema.session.userId, target.userId), eq(schema.session.activeOrganizationId, actor.organizationId)));
     await audit(tx, actor, "member.removed", "member", memberId, { userId: target.userId, role: target.role });
   });
 }
