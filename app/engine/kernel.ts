@@ -113,9 +113,12 @@ export const rowScratch = (nz: number): RowScratch => ({ dz: new Float64Array(nz
 
 /**
  * Add one emitter's percent at every (xs[i], y, zs[k]) into acc[i·nz + k].
- * Fast paths for the spherical model with isotropic and 3GPP patterns (the
- * horizontal part once per column, heights inside; atan skipped where the
- * pattern is capped); any other model/pattern goes through percentAt.
+ * Fast paths for the spherical model (OET-65 eq. (3)) with the isotropic and
+ * the 3GPP TR 38.901 patterns: the horizontal part once per column, heights
+ * inside, and the pattern's gains read from its tables (patterns.ts: H in cos φ,
+ * V in tan²θ, or in cos θ for wide vertical beams) instead of atan/exp; the
+ * horizontally capped half-space costs one division. Any other model or
+ * pattern goes through percentAt, the reference the fast paths are tested against.
  * mask (optional, length ≥ maskOffset + nx): columns with 0 are skipped.
  */
 export function accumulateRow(
