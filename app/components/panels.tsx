@@ -1,4 +1,5 @@
 import type { ReactNode } from "react";
+import { Link } from "react-router";
 import type { Flash } from "~/flash.server";
 
 export function Card({ title, children, actions }: { title?: ReactNode; children: ReactNode; actions?: ReactNode }) {
@@ -46,5 +47,16 @@ export function PageHeader({ title, children }: { title: string; children?: Reac
       <h1 className="text-2xl font-semibold tracking-tight text-ink-900">{title}</h1>
       {children ? <div className="mt-1 text-sm text-ink-600">{children}</div> : null}
     </header>
+  );
+}
+
+/** The one link under an auth card: back to sign-in, or wherever the page points. */
+export function FooterLink({ to, children }: { to: string; children: ReactNode }) {
+  return (
+    <p className="mt-6 text-sm">
+      <Link to={to} className="text-field-600 underline">
+        {children}
+      </Link>
+    </p>
   );
 }

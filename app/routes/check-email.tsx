@@ -1,4 +1,5 @@
-import { Link, useSearchParams } from "react-router";
+import { useSearchParams } from "react-router";
+import { FooterLink } from "~/components/panels";
 import type { Route } from "./+types/check-email";
 
 export const meta: Route.MetaFunction = () => [{ title: "Check your e-mail · Isotrope" }];
@@ -13,11 +14,7 @@ export default function CheckEmail() {
         We sent a confirmation link to {email ? <strong className="text-ink-900">{email}</strong> : "your address"}. Follow it within
         the hour to finish signing up.
       </p>
-      <p className="mt-6 text-sm">
-        <Link to="/sign-in" className="text-field-600 underline">
-          Back to sign-in
-        </Link>
-      </p>
+      <FooterLink to="/sign-in">Back to sign-in</FooterLink>
     </>
   );
 }

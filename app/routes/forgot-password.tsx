@@ -1,6 +1,7 @@
 import { getFormProps, useForm } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
-import { data, Form, Link } from "react-router";
+import { data, Form } from "react-router";
+import { FooterLink } from "~/components/panels";
 import { callAuth } from "~/auth-call.server";
 import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
@@ -35,11 +36,7 @@ export default function ForgotPassword({ actionData }: Route.ComponentProps) {
         <Field label="E-mail" autoComplete="email" {...inputProps(fields.email, "email")} />
         <Button className="w-full">Send the link</Button>
       </Form>
-      <p className="mt-6 text-sm">
-        <Link to="/sign-in" className="text-field-600 underline">
-          Back to sign-in
-        </Link>
-      </p>
+      <FooterLink to="/sign-in">Back to sign-in</FooterLink>
     </>
   );
 }

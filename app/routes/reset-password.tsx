@@ -1,6 +1,7 @@
 import { getFormProps, useForm } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
-import { data, Form, Link } from "react-router";
+import { data, Form } from "react-router";
+import { FooterLink } from "~/components/panels";
 import { callAuth } from "~/auth-call.server";
 import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
@@ -42,11 +43,7 @@ export default function ResetPassword({ loaderData, actionData }: Route.Componen
         <p role="alert" className="text-sm text-ink-600">
           {loaderData.problem}
         </p>
-        <p className="mt-6 text-sm">
-          <Link to="/forgot-password" className="text-field-600 underline">
-            Send a new link
-          </Link>
-        </p>
+        <FooterLink to="/forgot-password">Send a new link</FooterLink>
       </>
     );
   }

@@ -1,4 +1,5 @@
-import { data, Link } from "react-router";
+import { data } from "react-router";
+import { FooterLink } from "~/components/panels";
 import type { Route } from "./+types/verified";
 
 export const meta: Route.MetaFunction = () => [{ title: "E-mail confirmation · Isotrope" }];
@@ -23,11 +24,7 @@ export default function Verified({ loaderData }: Route.ComponentProps) {
       <p className="text-sm text-ink-600" role={problem ? "alert" : undefined}>
         {problem ?? "Thank you. Your address is confirmed and you are signed in."}
       </p>
-      <p className="mt-6 text-sm">
-        <Link to={problem ? "/sign-in" : "/"} className="text-field-600 underline">
-          {problem ? "Go to sign-in" : "Continue to Isotrope"}
-        </Link>
-      </p>
+      <FooterLink to={problem ? "/sign-in" : "/"}>{problem ? "Go to sign-in" : "Continue to Isotrope"}</FooterLink>
     </>
   );
 }
