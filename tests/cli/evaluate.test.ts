@@ -60,6 +60,18 @@ describe("npm run evaluate -- FILE", () => {
     expect(out.points[0].contributions).toHaveLength(6);
   });
 
+  it("polygons, classification, contours and the work-area plan come out as in-process (worker threads on)", () => {
+    const req = rooftop(12, 30, 20) as any;
+    req.grid.polygons = [[[2, 2], [28, 3], [25, 18], [4, 15]]];
+    req.grid.classify = true;
+    req.grid.contours = [100, 50];
+    req.workArea = { polygon: [[5, 5], [15, 5], [15, 12], [5, 12]] };
+    req.screening = { distanceM: 3 };
+    const r = run([file("full.json", req)], undefined, { ISOTROPE_ENGINE_THREADS: "2" });
+    expect(r.stderr).toBe("");
+    expect(JSON.parse(r.stdout)).toEqual(JSON.parse(JSON.stringify(evaluate(req))));
+  });
+
   it("a hand-checked point: 1 kW EIRP at 10 m, 1900 MHz, FCC general → 7.9577 %", () => {
     const req = {
       standard: "fcc",
