@@ -181,6 +181,7 @@ export function accumulateRow(
   const phiCap = Math.sqrt(am / cH);
   const cosPhiCap = phiCap >= Math.PI ? -2 : Math.cos(phiCap);
   const vt = p.vTable;
+  const vr = p.vOverR;
   const ht = p.hTable;
   const tauMax = p.vTauMax;
   const vInv = p.vInvStep;
@@ -213,6 +214,19 @@ export function accumulateRow(
         const irh2 = 1 / rh2;
         const cphi = f / rh;
         if (cphi < cLo) {
+          if (rh2 >= R2_MIN) {
+            for (let k = 0; k < nz; k++) {
+              const dz2 = dz2s[k];
+              const tau = dz2 * irh2;
+              if (tau < tauMax) {
+                const q = tau * vInv;
+                const iv = q | 0;
+                const b0 = vr[2 * iv + 1];
+                acc[base + k] += cMin * (b0 + (q - iv) * (vr[2 * iv + 3] - b0)) * irh2;
+              } else acc[base + k] += cMin / (rh2 + dz2);
+            }
+            continue;
+          }
           for (let k = 0; k < nz; k++) {
             let r2 = rh2 + dz2s[k];
             if (r2 < R2_MIN) r2 = R2_MIN;
@@ -225,6 +239,27 @@ export function accumulateRow(
         const ih = x | 0;
         const kh = kSph * (ht[ih] + (x - ih) * (ht[ih + 1] - ht[ih]));
         const kMin = cMin;
+        if (rh2 >= R2_MIN) {
+          // R² = R_h²·(1 + τ): percent = max(k_H·V(τ), c_min)/R² read from the V/(1+τ) and 1/(1+τ) table.
+          for (let k = 0; k < nz; k++) {
+            const dz2 = dz2s[k];
+            const tau = dz2 * irh2;
+            if (tau < tauMax) {
+              const q = tau * vInv;
+              const iv = q | 0;
+              const j2 = 2 * iv;
+              const fr = q - iv;
+              const a0 = vr[j2];
+              const b0 = vr[j2 + 1];
+              const va = a0 + fr * (vr[j2 + 2] - a0);
+              const vb = b0 + fr * (vr[j2 + 3] - b0);
+              acc[base + k] += Math.max(kh * va, kMin * vb) * irh2;
+            } else {
+              acc[base + k] += Math.max(kh * gSla, kMin) / (rh2 + dz2);
+            }
+          }
+          continue;
+        }
         for (let k = 0; k < nz; k++) {
           const dz2 = dz2s[k];
           let r2 = rh2 + dz2;

@@ -58,6 +58,12 @@ export interface PreparedPattern {
    * Empty when θ_SLA ≥ 80° or φ_cap ≥ 170° (the kernel then uses atan and exp).
    */
   vTable: Float64Array;
+  /**
+   * The same vertical gain divided by 1 + τ, interleaved with 1/(1 + τ):
+   * [V(τ₀)/(1+τ₀), 1/(1+τ₀), V(τ₁)/(1+τ₁), …], so that with R² = R_h²(1 + τ) the
+   * kernel needs no division per height (percent = k·V/R² = k·(V/(1+τ))/R_h²).
+   */
+  vOverR: Float64Array;
   vTauMax: number;
   vInvStep: number;
   gSla: number;
@@ -97,6 +103,7 @@ function blank(kind: number): PreparedPattern {
     g180: 0,
     ghrBack: 0,
     vTable: EMPTY,
+    vOverR: EMPTY,
     vTauMax: 0,
     vInvStep: 0,
     gSla: 0,
@@ -126,6 +133,23 @@ function verticalTable(cV: number, sla: number, tauMax: number): Float64Array {
       const th = Math.atan(Math.sqrt((i * tauMax) / N_TABLE));
       const g = 10 ** (-(cV * th * th) / 10);
       t[i] = g > gSla ? g : gSla;
+    }
+    if (vTables.size > 64) vTables.clear();
+    vTables.set(key, t);
+  }
+  return t;
+}
+
+/** Memoised V(τ)/(1+τ) and 1/(1+τ), interleaved (see PreparedPattern.vOverR). */
+function verticalOverRTable(v: Float64Array, cV: number, sla: number, tauMax: number): Float64Array {
+  const key = `overR|${cV}|${sla}`;
+  let t = vTables.get(key);
+  if (!t) {
+    t = new Float64Array(2 * v.length);
+    for (let i = 0; i < v.length; i++) {
+      const b = 1 / (1 + (i * tauMax) / N_TABLE);
+      t[2 * i] = v[i] * b;
+      t[2 * i + 1] = b;
     }
     if (vTables.size > 64) vTables.clear();
     vTables.set(key, t);
@@ -200,6 +224,7 @@ export function preparePattern(spec: PatternSpec | undefined): PreparedPattern {
       p.vTauMax = Math.tan(thSla) ** 2;
       p.vInvStep = N_TABLE / p.vTauMax;
       p.vTable = verticalTable(p.cV, p.sla, p.vTauMax);
+      p.vOverR = verticalOverRTable(p.vTable, p.cV, p.sla, p.vTauMax);
     } else if (thSla > 1e-6) {
       p.vcTable = verticalCosTable(p.cV, p.sla);
     }
