@@ -14,6 +14,8 @@
 import { absAtan2, expNeg } from "./fastmath";
 import {
   N_TABLE,
+  TAB_STEP_DEG,
+  PATTERN_TABULATED,
   patternAttenuationDb,
   PATTERN_3GPP,
   PATTERN_ISOTROPIC,
@@ -134,6 +136,10 @@ export function accumulateRow(
   const nx = xs.length;
   const nz = zs.length;
   const kind = pe.pattern.kind;
+  if (pe.model === MODEL_SPHERICAL && kind === PATTERN_TABULATED) {
+    accumulateRowTabulated(pe, xs, y, zs, acc, mask, maskOffset);
+    return;
+  }
   if (pe.model !== MODEL_SPHERICAL || (kind !== PATTERN_ISOTROPIC && kind !== PATTERN_3GPP)) {
     for (let i = 0; i < nx; i++) {
       if (mask !== null && mask[maskOffset + i] === 0) continue;
@@ -377,6 +383,67 @@ export function accumulateRow(
       let a = ah * DB_TO_NEPER + av;
       if (a > am * DB_TO_NEPER) a = am * DB_TO_NEPER;
       acc[base + k] += (kSph * expNeg(-a)) / r2;
+    }
+  }
+}
+
+const DEG = 180 / Math.PI;
+const INV_STEP = 1 / TAB_STEP_DEG;
+
+/**
+ * Spherical model with tabulated cuts: the same A = A_H(φ) + A_V(−θ) as
+ * attenuationTabulated, with the fast atan and exp (no allocation, no search).
+ */
+function accumulateRowTabulated(
+  pe: PreparedEmitter,
+  xs: Float64Array,
+  y: number,
+  zs: Float64Array,
+  acc: Float64Array,
+  mask: Uint8Array | null,
+  maskOffset: number,
+): void {
+  const nx = xs.length;
+  const nz = zs.length;
+  const p = pe.pattern;
+  const hr = p.hRes;
+  const vr = p.vRes;
+  const am = p.am;
+  const kSph = pe.kSph;
+  const sinAz = pe.sinAz;
+  const cosAz = pe.cosAz;
+  const sinT = pe.sinT;
+  const cosT = pe.cosT;
+  const dy = y - pe.y;
+  const dyy = dy * dy;
+  for (let i = 0; i < nx; i++) {
+    if (mask !== null && mask[maskOffset + i] === 0) continue;
+    const dx = xs[i] - pe.x;
+    const f = dx * sinAz + dy * cosAz;
+    const s = dx * cosAz - dy * sinAz;
+    const ss = s * s;
+    const rh2 = dx * dx + dyy;
+    const fc = f * cosT;
+    const fs = f * sinT;
+    const base = i * nz;
+    for (let k = 0; k < nz; k++) {
+      const dz = zs[k] - pe.z;
+      let r2 = rh2 + dz * dz;
+      if (r2 < R2_MIN) r2 = R2_MIN;
+      const f2 = fc - dz * sinT;
+      const u = fs + dz * cosT;
+      // φ in [0°, 360°) clockwise, and the vertical-cut angle −θ in [0°, 360°).
+      const phiAbs = absAtan2(s, f2) * DEG;
+      const ph = s < 0 ? 360 - phiAbs : phiAbs;
+      const thAbs = absAtan2(u, Math.sqrt(f2 * f2 + ss)) * DEG;
+      const va = u > 0 ? 360 - thAbs : thAbs;
+      const xh = (ph >= 360 ? 0 : ph) * INV_STEP;
+      const ih = xh | 0;
+      const xv = (va >= 360 ? 0 : va) * INV_STEP;
+      const iv = xv | 0;
+      let a = hr[ih] + (xh - ih) * (hr[ih + 1] - hr[ih]) + vr[iv] + (xv - iv) * (vr[iv + 1] - vr[iv]);
+      if (a > am) a = am;
+      acc[base + k] += (kSph * expNeg(-a * DB_TO_NEPER)) / r2;
     }
   }
 }

@@ -76,6 +76,9 @@ export interface PreparedPattern {
    */
   vcTable: Float64Array;
   /** Tabulated cuts, sorted on [0, 360) degrees, wrapped. */
+  /** Tabulated cuts resampled at TAB_STEP_DEG on [0°, 360°] (TAB_N + 1 values), dB. */
+  hRes: Float64Array;
+  vRes: Float64Array;
   hAng: Float64Array;
   hAtt: Float64Array;
   vAng: Float64Array;
@@ -111,6 +114,8 @@ function blank(kind: number): PreparedPattern {
     hCmin: 1,
     hInvStep: 0,
     vcTable: EMPTY,
+    hRes: EMPTY,
+    vRes: EMPTY,
     hAng: EMPTY,
     hAtt: EMPTY,
     vAng: EMPTY,
@@ -263,6 +268,8 @@ export function preparePattern(spec: PatternSpec | undefined): PreparedPattern {
   [p.hAng, p.hAtt] = prepareCut(spec.horizontal);
   [p.vAng, p.vAtt] = prepareCut(spec.vertical);
   p.am = spec.maxAttenuationDb ?? Infinity;
+  p.hRes = resampleCut(p.hAng, p.hAtt);
+  p.vRes = resampleCut(p.vAng, p.vAtt);
   p.h3 = tabulatedBeamwidthDeg(p.hAng, p.hAtt) * RAD;
   p.v3 = tabulatedBeamwidthDeg(p.vAng, p.vAtt) * RAD;
   return p;
@@ -337,15 +344,36 @@ export function interpolateCut(ang: Float64Array, att: Float64Array, deg: number
   return att[lo] + t * (att[hi] - att[lo]);
 }
 
+/** Resampling step of tabulated cuts: 0.1°, so a cut given at multiples of 0.1° is reproduced exactly. */
+export const TAB_STEP_DEG = 0.1;
+export const TAB_N = 3600;
+
+/** A cut resampled at TAB_STEP_DEG on [0°, 360°] by its own linear interpolation. */
+function resampleCut(ang: Float64Array, att: Float64Array): Float64Array {
+  const t = new Float64Array(TAB_N + 2);
+  for (let i = 0; i < t.length; i++) t[i] = interpolateCut(ang, att, Math.min(i, TAB_N) * TAB_STEP_DEG);
+  return t;
+}
+
+/** Linear interpolation in a resampled cut at a (wrapped) angle in degrees. */
+export function resampledAt(t: Float64Array, deg: number): number {
+  let a = deg % 360;
+  if (a < 0) a += 360;
+  const x = a / TAB_STEP_DEG;
+  const i = x | 0;
+  return t[i] + (x - i) * (t[i + 1] - t[i]);
+}
+
 /**
  * Tabulated horizontal and vertical cuts combined by summation (the usual
  * "2D interpolation by summing cuts"): A = A_H(φ) + A_V(θ), capped at the
- * pattern's maxAttenuationDb when given. The vertical cut's angle is measured
- * positive BELOW boresight (the convention of common antenna pattern files and
- * of tiltDeg), so θ (positive up) is looked up at −θ.
+ * pattern's maxAttenuationDb when given; each cut interpolated linearly in dB
+ * (resampled at 0.1°, exact for cuts given at multiples of 0.1°). The vertical
+ * cut's angle is measured positive BELOW boresight (the convention of common
+ * antenna pattern files and of tiltDeg), so θ (positive up) is looked up at −θ.
  */
 export function attenuationTabulated(p: PreparedPattern, phi: number, theta: number): number {
-  const a = interpolateCut(p.hAng, p.hAtt, phi / RAD) + interpolateCut(p.vAng, p.vAtt, -theta / RAD);
+  const a = resampledAt(p.hRes, phi / RAD) + resampledAt(p.vRes, -theta / RAD);
   return a > p.am ? p.am : a;
 }
 
