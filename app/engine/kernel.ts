@@ -15,6 +15,9 @@ import { absAtan2, expNeg } from "./fastmath";
 import {
   N_TABLE,
   TAB_STEP_DEG,
+  F_STEP_DEG,
+  f1336FromTables,
+  PATTERN_F1336,
   PATTERN_TABULATED,
   patternAttenuationDb,
   PATTERN_3GPP,
@@ -136,7 +139,7 @@ export function accumulateRow(
   const nx = xs.length;
   const nz = zs.length;
   const kind = pe.pattern.kind;
-  if (pe.model === MODEL_SPHERICAL && kind === PATTERN_TABULATED) {
+  if (pe.model === MODEL_SPHERICAL && (kind === PATTERN_TABULATED || kind === PATTERN_F1336)) {
     accumulateRowTabulated(pe, xs, y, zs, acc, mask, maskOffset);
     return;
   }
@@ -389,10 +392,12 @@ export function accumulateRow(
 
 const DEG = 180 / Math.PI;
 const INV_STEP = 1 / TAB_STEP_DEG;
+const F_INV_STEP = 1 / F_STEP_DEG;
 
 /**
- * Spherical model with tabulated cuts: the same A = A_H(φ) + A_V(−θ) as
- * attenuationTabulated, with the fast atan and exp (no allocation, no search).
+ * Spherical model with tabulated cuts (A = A_H(φ) + A_V(−θ), as attenuationTabulated)
+ * or the F.1336 sectoral pattern (through the same tables as attenuationF1336),
+ * with the fast atan and exp: no allocation, no search, no log/pow per sample.
  */
 function accumulateRowTabulated(
   pe: PreparedEmitter,
@@ -416,6 +421,7 @@ function accumulateRowTabulated(
   const cosT = pe.cosT;
   const dy = y - pe.y;
   const dyy = dy * dy;
+  const f1336 = p.kind === PATTERN_F1336;
   for (let i = 0; i < nx; i++) {
     if (mask !== null && mask[maskOffset + i] === 0) continue;
     const dx = xs[i] - pe.x;
@@ -432,17 +438,21 @@ function accumulateRowTabulated(
       if (r2 < R2_MIN) r2 = R2_MIN;
       const f2 = fc - dz * sinT;
       const u = fs + dz * cosT;
-      // φ in [0°, 360°) clockwise, and the vertical-cut angle −θ in [0°, 360°).
       const phiAbs = absAtan2(s, f2) * DEG;
-      const ph = s < 0 ? 360 - phiAbs : phiAbs;
       const thAbs = absAtan2(u, Math.sqrt(f2 * f2 + ss)) * DEG;
-      const va = u > 0 ? 360 - thAbs : thAbs;
-      const xh = (ph >= 360 ? 0 : ph) * INV_STEP;
-      const ih = xh | 0;
-      const xv = (va >= 360 ? 0 : va) * INV_STEP;
-      const iv = xv | 0;
-      let a = hr[ih] + (xh - ih) * (hr[ih + 1] - hr[ih]) + vr[iv] + (xv - iv) * (vr[iv + 1] - vr[iv]);
-      if (a > am) a = am;
+      let a: number;
+      if (f1336) a = f1336FromTables(p, phiAbs * F_INV_STEP, thAbs * F_INV_STEP);
+      else {
+        // φ in [0°, 360°) clockwise, and the vertical-cut angle −θ in [0°, 360°).
+        const ph = s < 0 ? 360 - phiAbs : phiAbs;
+        const va = u > 0 ? 360 - thAbs : thAbs;
+        const xh = (ph >= 360 ? 0 : ph) * INV_STEP;
+        const ih = xh | 0;
+        const xv = (va >= 360 ? 0 : va) * INV_STEP;
+        const iv = xv | 0;
+        a = hr[ih] + (xh - ih) * (hr[ih + 1] - hr[ih]) + vr[iv] + (xv - iv) * (vr[iv + 1] - vr[iv]);
+        if (a > am) a = am;
+      }
       acc[base + k] += (kSph * expNeg(-a * DB_TO_NEPER)) / r2;
     }
   }

@@ -49,6 +49,9 @@ export interface PreparedPattern {
   cC: number;
   g180: number;
   ghrBack: number;
+  /** F.1336 G_hr at |φ| = i·F_STEP_DEG (0…180°) and G_vr at |θ| = i·F_STEP_DEG (0…90°), dB. */
+  ghrT: Float64Array;
+  gvrT: Float64Array;
   /**
    * 3GPP gain tables in squared variables, so the kernel needs neither sqrt nor
    * atan nor exp (linear interpolation on N_TABLE intervals, relative error < 10⁻⁶):
@@ -105,6 +108,8 @@ function blank(kind: number): PreparedPattern {
     cC: 0,
     g180: 0,
     ghrBack: 0,
+    ghrT: EMPTY,
+    gvrT: EMPTY,
     vTable: EMPTY,
     vOverR: EMPTY,
     vTauMax: 0,
@@ -262,6 +267,18 @@ export function preparePattern(spec: PatternSpec | undefined): PreparedPattern {
     p.cC = (10 * Math.log10(((180 / th3) ** 1.5 * (4 ** -1.5 + kV)) / (1 + 8 * kP))) / Math.log10(22.5 / th3);
     p.lambdaKv = 12 - p.cC * Math.log10(4) - 10 * Math.log10(4 ** -1.5 + kV);
     p.ghrBack = f1336Ghr(p, 180 / phi3);
+    const key = `${phi3}|${th3}|${kH}|${kV}|${kP}`;
+    let tables = f1336Tables.get(key);
+    if (!tables) {
+      const gh = new Float64Array(F_NH + 2);
+      for (let i = 0; i < gh.length; i++) gh[i] = f1336Ghr(p, (Math.min(i, F_NH) * F_STEP_DEG) / phi3);
+      const gv = new Float64Array(F_NV + 2);
+      for (let i = 0; i < gv.length; i++) gv[i] = f1336Gvr(p, (Math.min(i, F_NV) * F_STEP_DEG) / th3);
+      tables = [gh, gv];
+      if (f1336Tables.size > 64) f1336Tables.clear();
+      f1336Tables.set(key, tables);
+    }
+    [p.ghrT, p.gvrT] = tables;
     return p;
   }
   const p = blank(PATTERN_TABULATED);
@@ -304,19 +321,46 @@ function f1336Gvr(p: PreparedPattern, xv: number): number {
   return g < p.g180 ? p.g180 : g;
 }
 
+/** F.1336 tables' step: 0.01° (interpolation error below 10⁻⁴ dB for θ3 ≥ 2°). */
+export const F_STEP_DEG = 0.01;
+const F_NH = 18_000;
+const f1336Tables = new Map<string, [Float64Array, Float64Array]>();
+const F_NV = 9_000;
+
 /**
- * Rec. ITU-R F.1336-5 §3.1, sectoral reference pattern (peak side lobes), as a
- * relative pattern: G = G_hr(x_h) + R·G_vr(x_v), R = (G_hr(x_h) − G_hr(180/φ3)) /
- * (G_hr(0) − G_hr(180/φ3)), x_h = |φ|/φ3, x_v = |θ|/θ3. From memory.
+ * Rec. ITU-R F.1336-5 recommends 3.1.1, sectoral reference pattern (peak side
+ * lobes), as a relative pattern: G = G_hr(x_h) + R·G_vr(x_v), R = (G_hr(x_h) −
+ * G_hr(180/φ3)) / (G_hr(0) − G_hr(180/φ3)), x_h = |φ|/φ3, x_v = |θ|/θ3 (from memory).
+ * This is the exact formula; attenuationF1336 reads the same G_hr and G_vr from
+ * 0.01° tables.
  */
-export function attenuationF1336(p: PreparedPattern, phi: number, theta: number): number {
-  const xh = Math.abs(phi) / p.h3;
-  const xv = Math.abs(theta) / p.v3;
-  const ghr = f1336Ghr(p, xh);
+export function attenuationF1336Exact(p: PreparedPattern, phi: number, theta: number): number {
+  const ghr = f1336Ghr(p, Math.abs(phi) / p.h3);
+  return f1336Combine(p, ghr, f1336Gvr(p, Math.abs(theta) / p.v3));
+}
+
+function f1336Combine(p: PreparedPattern, ghr: number, gvr: number): number {
   const r = p.ghrBack === 0 ? 1 : (ghr - p.ghrBack) / (0 - p.ghrBack);
-  const g = ghr + r * f1336Gvr(p, xv);
-  const a = -g;
+  const a = -(ghr + r * gvr);
   return a > -p.g180 ? -p.g180 : a < 0 ? 0 : a;
+}
+
+/** F.1336-5 sectoral pattern through its 0.01° tables (what the engine uses everywhere). */
+export function attenuationF1336(p: PreparedPattern, phi: number, theta: number): number {
+  return f1336FromTables(p, (Math.abs(phi) / RAD) / F_STEP_DEG, (Math.abs(theta) / RAD) / F_STEP_DEG);
+}
+
+/** F.1336 attenuation at table positions xh = |φ|/0.01°, xv = |θ|/0.01° (clamped to the tables). */
+export function f1336FromTables(p: PreparedPattern, xh: number, xv: number): number {
+  if (xh > F_NH) xh = F_NH;
+  if (xv > F_NV) xv = F_NV;
+  const ih = xh | 0;
+  const iv = xv | 0;
+  const th = p.ghrT;
+  const tv = p.gvrT;
+  const ghr = th[ih] + (xh - ih) * (th[ih + 1] - th[ih]);
+  const gvr = tv[iv] + (xv - iv) * (tv[iv + 1] - tv[iv]);
+  return f1336Combine(p, ghr, gvr);
 }
 
 /** Linear interpolation on a wrapped 360° cut (angles sorted on [0, 360)). */
