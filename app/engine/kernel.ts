@@ -122,8 +122,10 @@ export const rowScratch = (nz: number): RowScratch => ({ dz: new Float64Array(nz
  * the 3GPP TR 38.901 patterns: the horizontal part once per column, heights
  * inside, and the pattern's gains read from its tables (patterns.ts: H in cos φ,
  * V in tan²θ, or in cos θ for wide vertical beams) instead of atan/exp; the
- * horizontally capped half-space costs one division. Any other model or
- * pattern goes through percentAt, the reference the fast paths are tested against.
+ * horizontally capped half-space costs one division. Tabulated cuts and F.1336
+ * use their resampled tables. Any other model goes through percentAt, the
+ * reference the fast paths are tested against. Each path is its own small
+ * function so that it is optimised quickly and on its own type feedback.
  * mask (optional, length ≥ maskOffset + nx): columns with 0 are skipped.
  */
 export function accumulateRow(
@@ -136,22 +138,11 @@ export function accumulateRow(
   mask: Uint8Array | null,
   maskOffset: number,
 ): void {
-  const nx = xs.length;
-  const nz = zs.length;
   const kind = pe.pattern.kind;
-  if (pe.model === MODEL_SPHERICAL && (kind === PATTERN_TABULATED || kind === PATTERN_F1336)) {
-    accumulateRowTabulated(pe, xs, y, zs, acc, mask, maskOffset);
-    return;
-  }
-  if (pe.model !== MODEL_SPHERICAL || (kind !== PATTERN_ISOTROPIC && kind !== PATTERN_3GPP)) {
-    for (let i = 0; i < nx; i++) {
-      if (mask !== null && mask[maskOffset + i] === 0) continue;
-      const x = xs[i];
-      const base = i * nz;
-      for (let k = 0; k < nz; k++) acc[base + k] += percentAt(pe, x, y, zs[k]);
-    }
-    return;
-  }
+  if (pe.model !== MODEL_SPHERICAL) return rowReference(pe, xs, y, zs, acc, mask, maskOffset);
+  if (kind === PATTERN_TABULATED || kind === PATTERN_F1336) return accumulateRowTabulated(pe, xs, y, zs, acc, mask, maskOffset);
+  if (kind !== PATTERN_ISOTROPIC && kind !== PATTERN_3GPP) return rowReference(pe, xs, y, zs, acc, mask, maskOffset);
+  const nz = zs.length;
   const dzs = scratch.dz;
   const dz2s = scratch.dz2;
   for (let k = 0; k < nz; k++) {
@@ -159,36 +150,91 @@ export function accumulateRow(
     dzs[k] = d;
     dz2s[k] = d * d;
   }
+  if (kind === PATTERN_ISOTROPIC) return rowIsotropic(pe, xs, y, nz, dz2s, acc, mask, maskOffset);
+  const p = pe.pattern;
+  if (p.vTable.length > 0 && p.hTable.length > 0) {
+    if (pe.sinT === 0) return row3gppFlat(pe, xs, y, zs, dz2s, acc, mask, maskOffset);
+    return row3gppTilted(pe, xs, y, dzs, dz2s, acc, mask, maskOffset);
+  }
+  if (p.vcTable.length > 0 && p.hTable.length > 0) return row3gppWide(pe, xs, y, dzs, dz2s, acc, mask, maskOffset);
+  return row3gppDirect(pe, xs, y, dzs, dz2s, acc, mask, maskOffset);
+}
+
+/** Any model and pattern, point by point. */
+function rowReference(
+  pe: PreparedEmitter,
+  xs: Float64Array,
+  y: number,
+  zs: Float64Array,
+  acc: Float64Array,
+  mask: Uint8Array | null,
+  maskOffset: number,
+): void {
+  const nx = xs.length;
+  const nz = zs.length;
+  for (let i = 0; i < nx; i++) {
+    if (mask !== null && mask[maskOffset + i] === 0) continue;
+    const x = xs[i];
+    const base = i * nz;
+    for (let k = 0; k < nz; k++) acc[base + k] += percentAt(pe, x, y, zs[k]);
+  }
+}
+
+/** Isotropic spherical: percent = k/R². */
+function rowIsotropic(
+  pe: PreparedEmitter,
+  xs: Float64Array,
+  y: number,
+  nz: number,
+  dz2s: Float64Array,
+  acc: Float64Array,
+  mask: Uint8Array | null,
+  maskOffset: number,
+): void {
+  const nx = xs.length;
   const dy = y - pe.y;
   const dyy = dy * dy;
   const kSph = pe.kSph;
-  if (kind === PATTERN_ISOTROPIC) {
-    for (let i = 0; i < nx; i++) {
-      if (mask !== null && mask[maskOffset + i] === 0) continue;
-      const dx = xs[i] - pe.x;
-      const rh2 = dx * dx + dyy;
-      const base = i * nz;
-      for (let k = 0; k < nz; k++) {
-        let r2 = rh2 + dz2s[k];
-        if (r2 < R2_MIN) r2 = R2_MIN;
-        acc[base + k] += kSph / r2;
-      }
+  const ex = pe.x;
+  for (let i = 0; i < nx; i++) {
+    if (mask !== null && mask[maskOffset + i] === 0) continue;
+    const dx = xs[i] - ex;
+    const rh2 = dx * dx + dyy;
+    const base = i * nz;
+    for (let k = 0; k < nz; k++) {
+      let r2 = rh2 + dz2s[k];
+      if (r2 < R2_MIN) r2 = R2_MIN;
+      acc[base + k] += kSph / r2;
     }
-    return;
   }
+}
+
+/**
+ * 3GPP pattern, tilt 0: φ and R_h per column; with R² = R_h²·(1 + τ), τ = tan²θ,
+ * percent = max(k·H(cos φ)·V(τ), c_min)/R² comes from the V/(1+τ) and 1/(1+τ)
+ * tables without a division per height. g = max(H·V, g_min) is
+ * A = min(min(A_H, A_max) + min(A_V, SLA_V), A_max) in gain form.
+ */
+function row3gppFlat(
+  pe: PreparedEmitter,
+  xs: Float64Array,
+  y: number,
+  zs: Float64Array,
+  dz2s: Float64Array,
+  acc: Float64Array,
+  mask: Uint8Array | null,
+  maskOffset: number,
+): void {
+  const nx = xs.length;
+  const nz = zs.length;
   const p = pe.pattern;
-  const cH = p.cH;
-  const cV = p.cV;
-  const am = p.am;
-  const sla = p.sla;
+  const kSph = pe.kSph;
   const sinAz = pe.sinAz;
   const cosAz = pe.cosAz;
-  const kV = cV * DB_TO_NEPER;
-  const gMin = expNeg(-am * DB_TO_NEPER);
-  const cMin = kSph * gMin;
-  // |φ| ≥ φ_cap ⇔ 12(φ/φ3)² ≥ A_max: the horizontal term alone reaches the cap.
-  const phiCap = Math.sqrt(am / cH);
-  const cosPhiCap = phiCap >= Math.PI ? -2 : Math.cos(phiCap);
+  const ex = pe.x;
+  const dy = y - pe.y;
+  const dyy = dy * dy;
+  const cMin = kSph * expNeg(-p.am * DB_TO_NEPER);
   const vt = p.vTable;
   const vr = p.vOverR;
   const ht = p.hTable;
@@ -197,175 +243,264 @@ export function accumulateRow(
   const gSla = p.gSla;
   const cLo = p.hCmin;
   const hInv = p.hInvStep;
-  const useTables = vt.length > 0 && ht.length > 0;
-  const vct = p.vcTable;
-  const useCosTables = !useTables && vct.length > 0 && ht.length > 0;
-  const sinT = pe.sinT;
-  const cosT = pe.cosT;
-  const tilted = sinT !== 0;
   for (let i = 0; i < nx; i++) {
     if (mask !== null && mask[maskOffset + i] === 0) continue;
-    const dx = xs[i] - pe.x;
+    const dx = xs[i] - ex;
     const f = dx * sinAz + dy * cosAz;
-    const s = dx * cosAz - dy * sinAz;
     const rh2 = dx * dx + dyy;
     const base = i * nz;
-    if (useTables) {
-      if (!tilted) {
-        // Tilt 0: φ and the horizontal distance do not depend on height.
-        // g = max(H(w)·V(τ), g_min) is A = min(min(A_H, A_max) + min(A_V, SLA_V), A_max) in gain form.
-        if (rh2 === 0) {
-          // On the antenna's own vertical axis: the reference path handles the degenerate angles.
-          for (let k = 0; k < nz; k++) acc[base + k] += percentAt(pe, xs[i], y, zs[k]);
-          continue;
+    if (rh2 === 0) {
+      // On the antenna's own vertical axis: the reference path handles the degenerate angles.
+      for (let k = 0; k < nz; k++) acc[base + k] += percentAt(pe, xs[i], y, zs[k]);
+      continue;
+    }
+    const irh2 = 1 / rh2;
+    const cphi = f / Math.sqrt(rh2);
+    if (cphi < cLo) {
+      // Beyond φ_cap the total is at A_max whatever θ.
+      if (rh2 >= R2_MIN) {
+        for (let k = 0; k < nz; k++) {
+          const dz2 = dz2s[k];
+          const tau = dz2 * irh2;
+          if (tau < tauMax) {
+            const q = tau * vInv;
+            const iv = q | 0;
+            const b0 = vr[2 * iv + 1];
+            acc[base + k] += cMin * (b0 + (q - iv) * (vr[2 * iv + 3] - b0)) * irh2;
+          } else acc[base + k] += cMin / (rh2 + dz2);
         }
-        const rh = Math.sqrt(rh2);
-        const irh2 = 1 / rh2;
-        const cphi = f / rh;
+      } else {
+        for (let k = 0; k < nz; k++) {
+          let r2 = rh2 + dz2s[k];
+          if (r2 < R2_MIN) r2 = R2_MIN;
+          acc[base + k] += cMin / r2;
+        }
+      }
+      continue;
+    }
+    let x = (cphi - cLo) * hInv;
+    if (x > N_TABLE) x = N_TABLE;
+    const ih = x | 0;
+    const kh = kSph * (ht[ih] + (x - ih) * (ht[ih + 1] - ht[ih]));
+    if (rh2 >= R2_MIN) {
+      for (let k = 0; k < nz; k++) {
+        const dz2 = dz2s[k];
+        const tau = dz2 * irh2;
+        if (tau < tauMax) {
+          const q = tau * vInv;
+          const iv = q | 0;
+          const j2 = 2 * iv;
+          const fr = q - iv;
+          const a0 = vr[j2];
+          const b0 = vr[j2 + 1];
+          const va = a0 + fr * (vr[j2 + 2] - a0);
+          const vb = b0 + fr * (vr[j2 + 3] - b0);
+          acc[base + k] += Math.max(kh * va, cMin * vb) * irh2;
+        } else {
+          acc[base + k] += Math.max(kh * gSla, cMin) / (rh2 + dz2);
+        }
+      }
+      continue;
+    }
+    for (let k = 0; k < nz; k++) {
+      const dz2 = dz2s[k];
+      let r2 = rh2 + dz2;
+      if (r2 < R2_MIN) r2 = R2_MIN;
+      // V(τ_max) = g_SLA, so clamping τ there is exact.
+      const q = Math.min(dz2 * irh2, tauMax) * vInv;
+      const iv = q | 0;
+      const c = kh * (vt[iv] + (q - iv) * (vt[iv + 1] - vt[iv]));
+      acc[base + k] += Math.max(c, cMin) / r2;
+    }
+  }
+}
+
+/** 3GPP pattern with tilt: the same tables, one square root and one division per sample. */
+function row3gppTilted(
+  pe: PreparedEmitter,
+  xs: Float64Array,
+  y: number,
+  dzs: Float64Array,
+  dz2s: Float64Array,
+  acc: Float64Array,
+  mask: Uint8Array | null,
+  maskOffset: number,
+): void {
+  const nx = xs.length;
+  const nz = dzs.length;
+  const p = pe.pattern;
+  const kSph = pe.kSph;
+  const sinAz = pe.sinAz;
+  const cosAz = pe.cosAz;
+  const sinT = pe.sinT;
+  const cosT = pe.cosT;
+  const ex = pe.x;
+  const dy = y - pe.y;
+  const dyy = dy * dy;
+  const gMin = expNeg(-p.am * DB_TO_NEPER);
+  const cMin = kSph * gMin;
+  const vt = p.vTable;
+  const ht = p.hTable;
+  const tauMax = p.vTauMax;
+  const vInv = p.vInvStep;
+  const gSla = p.gSla;
+  const cLo = p.hCmin;
+  const hInv = p.hInvStep;
+  for (let i = 0; i < nx; i++) {
+    if (mask !== null && mask[maskOffset + i] === 0) continue;
+    const dx = xs[i] - ex;
+    const f = dx * sinAz + dy * cosAz;
+    const s = dx * cosAz - dy * sinAz;
+    const ss = s * s;
+    const rh2 = dx * dx + dyy;
+    const fc = f * cosT;
+    const fs = f * sinT;
+    const base = i * nz;
+    for (let k = 0; k < nz; k++) {
+      const dz = dzs[k];
+      let r2 = rh2 + dz2s[k];
+      if (r2 < R2_MIN) r2 = R2_MIN;
+      const f2 = fc - dz * sinT;
+      const u = fs + dz * cosT;
+      const rho2 = f2 * f2 + ss;
+      if (rho2 > 0) {
+        // One division gives both 1/ρ and 1/R².
+        const rho = Math.sqrt(rho2);
+        const inv = 1 / (rho * r2);
+        const irho = inv * r2;
+        const cphi = f2 * irho;
         if (cphi < cLo) {
-          if (rh2 >= R2_MIN) {
-            for (let k = 0; k < nz; k++) {
-              const dz2 = dz2s[k];
-              const tau = dz2 * irh2;
-              if (tau < tauMax) {
-                const q = tau * vInv;
-                const iv = q | 0;
-                const b0 = vr[2 * iv + 1];
-                acc[base + k] += cMin * (b0 + (q - iv) * (vr[2 * iv + 3] - b0)) * irh2;
-              } else acc[base + k] += cMin / (rh2 + dz2);
-            }
-            continue;
-          }
-          for (let k = 0; k < nz; k++) {
-            let r2 = rh2 + dz2s[k];
-            if (r2 < R2_MIN) r2 = R2_MIN;
-            acc[base + k] += cMin / r2;
-          }
+          acc[base + k] += cMin * inv * rho;
           continue;
         }
         let x = (cphi - cLo) * hInv;
         if (x > N_TABLE) x = N_TABLE;
         const ih = x | 0;
-        const kh = kSph * (ht[ih] + (x - ih) * (ht[ih + 1] - ht[ih]));
-        const kMin = cMin;
-        if (rh2 >= R2_MIN) {
-          // R² = R_h²·(1 + τ): percent = max(k_H·V(τ), c_min)/R² read from the V/(1+τ) and 1/(1+τ) table.
-          for (let k = 0; k < nz; k++) {
-            const dz2 = dz2s[k];
-            const tau = dz2 * irh2;
-            if (tau < tauMax) {
-              const q = tau * vInv;
-              const iv = q | 0;
-              const j2 = 2 * iv;
-              const fr = q - iv;
-              const a0 = vr[j2];
-              const b0 = vr[j2 + 1];
-              const va = a0 + fr * (vr[j2 + 2] - a0);
-              const vb = b0 + fr * (vr[j2 + 3] - b0);
-              acc[base + k] += Math.max(kh * va, kMin * vb) * irh2;
-            } else {
-              acc[base + k] += Math.max(kh * gSla, kMin) / (rh2 + dz2);
-            }
-          }
-          continue;
-        }
-        for (let k = 0; k < nz; k++) {
-          const dz2 = dz2s[k];
-          let r2 = rh2 + dz2;
-          if (r2 < R2_MIN) r2 = R2_MIN;
-          // τ = tan²θ = dz²/R_h²; on the vertical axis (R_h = 0) θ = ±90° unless dz = 0 too.
-          // V(τ_max) = g_SLA, so clamping τ there is exact; min/max keep the loop branch-free.
-          const q = Math.min(dz2 * irh2, tauMax) * vInv;
-          const iv = q | 0;
-          const c = kh * (vt[iv] + (q - iv) * (vt[iv + 1] - vt[iv]));
-          acc[base + k] += Math.max(c, kMin) / r2;
-        }
+        const gh = ht[ih] + (x - ih) * (ht[ih + 1] - ht[ih]);
+        const tu = u * irho;
+        const q = Math.min(tu * tu, tauMax) * vInv;
+        const iv = q | 0;
+        const gv = vt[iv] + (q - iv) * (vt[iv + 1] - vt[iv]);
+        acc[base + k] += kSph * Math.max(gh * gv, gMin) * inv * rho;
         continue;
       }
-      const ss = s * s;
-      const fc = f * cosT;
-      const fs = f * sinT;
-      for (let k = 0; k < nz; k++) {
-        const dz = dzs[k];
-        let r2 = rh2 + dz2s[k];
-        if (r2 < R2_MIN) r2 = R2_MIN;
-        const f2 = fc - dz * sinT;
-        const u = fs + dz * cosT;
-        const rho2 = f2 * f2 + ss;
-        let g: number;
-        if (rho2 > 0) {
-          // One division gives both 1/ρ and 1/R².
-          const rho = Math.sqrt(rho2);
-          const inv = 1 / (rho * r2);
-          const irho = inv * r2;
-          const cphi = f2 * irho;
-          if (cphi < cLo) {
-            acc[base + k] += cMin * inv * rho;
-            continue;
-          }
-          let x = (cphi - cLo) * hInv;
-          if (x > N_TABLE) x = N_TABLE;
-          const ih = x | 0;
-          const gh = ht[ih] + (x - ih) * (ht[ih + 1] - ht[ih]);
-          const tu = u * irho;
-          const tau = tu * tu;
-          let gv: number;
-          if (tau >= tauMax) gv = gSla;
-          else {
-            const y = tau * vInv;
-            const iv = y | 0;
-            gv = vt[iv] + (y - iv) * (vt[iv + 1] - vt[iv]);
-          }
-          g = gh * gv;
-          if (g < gMin) g = gMin;
-          acc[base + k] += kSph * g * inv * rho;
-          continue;
-        }
-        // On the antenna's own vertical axis (ρ = 0): φ = 0, θ = ±90° (or 0 at the antenna itself).
-        g = u === 0 ? 1 : gSla;
-        acc[base + k] += (kSph * (g < gMin ? gMin : g)) / r2;
-      }
-      continue;
+      // On the antenna's own vertical axis (ρ = 0): φ = 0, θ = ±90° (or 0 at the antenna itself).
+      acc[base + k] += (kSph * Math.max(u === 0 ? 1 : gSla, gMin)) / r2;
     }
+  }
+}
+
+/** 3GPP pattern with a wide vertical beam (θ_SLA ≥ 80°): V read in cos θ = ρ/R. */
+function row3gppWide(
+  pe: PreparedEmitter,
+  xs: Float64Array,
+  y: number,
+  dzs: Float64Array,
+  dz2s: Float64Array,
+  acc: Float64Array,
+  mask: Uint8Array | null,
+  maskOffset: number,
+): void {
+  const nx = xs.length;
+  const nz = dzs.length;
+  const p = pe.pattern;
+  const kSph = pe.kSph;
+  const sinAz = pe.sinAz;
+  const cosAz = pe.cosAz;
+  const sinT = pe.sinT;
+  const cosT = pe.cosT;
+  const ex = pe.x;
+  const dy = y - pe.y;
+  const dyy = dy * dy;
+  const gMin = expNeg(-p.am * DB_TO_NEPER);
+  const cMin = kSph * gMin;
+  const ht = p.hTable;
+  const vct = p.vcTable;
+  const cLo = p.hCmin;
+  const hInv = p.hInvStep;
+  for (let i = 0; i < nx; i++) {
+    if (mask !== null && mask[maskOffset + i] === 0) continue;
+    const dx = xs[i] - ex;
+    const f = dx * sinAz + dy * cosAz;
+    const s = dx * cosAz - dy * sinAz;
     const ss = s * s;
-    if (useCosTables) {
-      // Wide vertical beams: V in cos θ = ρ/R (any tilt).
-      const fc = f * cosT;
-      const fs = f * sinT;
-      for (let k = 0; k < nz; k++) {
-        const dz = dzs[k];
-        let r2 = rh2 + dz2s[k];
-        if (r2 < R2_MIN) r2 = R2_MIN;
-        const f2 = fc - dz * sinT;
-        const u = fs + dz * cosT;
-        const rho2 = f2 * f2 + ss;
-        if (rho2 > 0) {
-          const rho = Math.sqrt(rho2);
-          const inv = 1 / (rho * r2);
-          const cphi = f2 * inv * r2;
-          if (cphi < cLo) {
-            acc[base + k] += cMin * inv * rho;
-            continue;
-          }
-          let x = (cphi - cLo) * hInv;
-          if (x > N_TABLE) x = N_TABLE;
-          const ih = x | 0;
-          const gh = ht[ih] + (x - ih) * (ht[ih + 1] - ht[ih]);
-          let ct = rho2 * Math.sqrt(r2) * inv * N_TABLE;
-          if (ct > N_TABLE) ct = N_TABLE;
-          const iv = ct | 0;
-          const gv = vct[iv] + (ct - iv) * (vct[iv + 1] - vct[iv]);
-          acc[base + k] += kSph * Math.max(gh * gv, gMin) * inv * rho;
-          continue;
-        }
-        // On the antenna's own vertical axis (ρ = 0): φ = 0, θ = ±90° (or 0 at the antenna itself).
-        acc[base + k] += (kSph * Math.max(u === 0 ? 1 : vct[0], gMin)) / r2;
-      }
-      continue;
-    }
-    // Fallback (horizontal cap beyond 170°): atan and exp per sample.
+    const rh2 = dx * dx + dyy;
     const fc = f * cosT;
     const fs = f * sinT;
+    const base = i * nz;
+    for (let k = 0; k < nz; k++) {
+      const dz = dzs[k];
+      let r2 = rh2 + dz2s[k];
+      if (r2 < R2_MIN) r2 = R2_MIN;
+      const f2 = fc - dz * sinT;
+      const u = fs + dz * cosT;
+      const rho2 = f2 * f2 + ss;
+      if (rho2 > 0) {
+        const rho = Math.sqrt(rho2);
+        const inv = 1 / (rho * r2);
+        const cphi = f2 * inv * r2;
+        if (cphi < cLo) {
+          acc[base + k] += cMin * inv * rho;
+          continue;
+        }
+        let x = (cphi - cLo) * hInv;
+        if (x > N_TABLE) x = N_TABLE;
+        const ih = x | 0;
+        const gh = ht[ih] + (x - ih) * (ht[ih + 1] - ht[ih]);
+        let ct = rho2 * Math.sqrt(r2) * inv * N_TABLE;
+        if (ct > N_TABLE) ct = N_TABLE;
+        const iv = ct | 0;
+        const gv = vct[iv] + (ct - iv) * (vct[iv + 1] - vct[iv]);
+        acc[base + k] += kSph * Math.max(gh * gv, gMin) * inv * rho;
+        continue;
+      }
+      // On the antenna's own vertical axis (ρ = 0): φ = 0, θ = ±90° (or 0 at the antenna itself).
+      acc[base + k] += (kSph * Math.max(u === 0 ? 1 : vct[0], gMin)) / r2;
+    }
+  }
+}
+
+/** 3GPP pattern without tables (horizontal cap beyond 170°): fast atan and exp per sample. */
+function row3gppDirect(
+  pe: PreparedEmitter,
+  xs: Float64Array,
+  y: number,
+  dzs: Float64Array,
+  dz2s: Float64Array,
+  acc: Float64Array,
+  mask: Uint8Array | null,
+  maskOffset: number,
+): void {
+  const nx = xs.length;
+  const nz = dzs.length;
+  const p = pe.pattern;
+  const kSph = pe.kSph;
+  const cH = p.cH;
+  const kV = p.cV * DB_TO_NEPER;
+  const am = p.am;
+  const slaN = p.sla * DB_TO_NEPER;
+  const amN = am * DB_TO_NEPER;
+  const sinAz = pe.sinAz;
+  const cosAz = pe.cosAz;
+  const sinT = pe.sinT;
+  const cosT = pe.cosT;
+  const ex = pe.x;
+  const dy = y - pe.y;
+  const dyy = dy * dy;
+  const cMin = kSph * expNeg(-amN);
+  // |φ| ≥ φ_cap ⇔ 12(φ/φ3)² ≥ A_max: the horizontal term alone reaches the cap.
+  const phiCap = Math.sqrt(am / cH);
+  const cosPhiCap = phiCap >= Math.PI ? -2 : Math.cos(phiCap);
+  for (let i = 0; i < nx; i++) {
+    if (mask !== null && mask[maskOffset + i] === 0) continue;
+    const dx = xs[i] - ex;
+    const f = dx * sinAz + dy * cosAz;
+    const s = dx * cosAz - dy * sinAz;
+    const ss = s * s;
+    const rh2 = dx * dx + dyy;
+    const fc = f * cosT;
+    const fs = f * sinT;
+    const base = i * nz;
     for (let k = 0; k < nz; k++) {
       const dz = dzs[k];
       let r2 = rh2 + dz2s[k];
@@ -382,9 +517,9 @@ export function accumulateRow(
       let ah = cH * phi * phi;
       if (ah > am) ah = am;
       let av = kV * th * th;
-      if (av > sla * DB_TO_NEPER) av = sla * DB_TO_NEPER;
+      if (av > slaN) av = slaN;
       let a = ah * DB_TO_NEPER + av;
-      if (a > am * DB_TO_NEPER) a = am * DB_TO_NEPER;
+      if (a > amN) a = amN;
       acc[base + k] += (kSph * expNeg(-a)) / r2;
     }
   }
