@@ -5,8 +5,12 @@
  * README.md in this folder for the field reference.
  */
 import * as z from "zod/mini";
+import en from "zod/v4/locales/en.js";
 import { axisCount } from "./axes";
 import { STANDARD_IDS, TIERS } from "./limits";
+
+// zod/mini ships without messages; the English ones say what was expected ("Too small: expected number to be >=0").
+z.config(en());
 
 /** Size bounds (see README): samples = grid points × heights (+ points); evaluations = samples × emitters. */
 export const MAX_SAMPLES = 8_000_000;

@@ -106,7 +106,18 @@ describe("npm run evaluate -- FILE", () => {
     const r = run([file("bad.json", req)]);
     expect(r.code).toBe(2);
     expect(r.stdout).toBe("");
-    expect(r.stderr).toMatch(/emitters\[1\]\.powerW/);
+    expect(r.stderr).toMatch(/emitters\[1\]\.powerW: Too small: expected number to be >=0/);
+  });
+
+  it("bad input says what was expected: a missing coordinate, an unknown standard", () => {
+    const missing = rooftop(1, 5, 5) as any;
+    delete missing.emitters[0].position.z;
+    const a = run([file("missing.json", missing)]);
+    expect(a.code).toBe(2);
+    expect(a.stderr).toMatch(/emitters\[0\]\.position\.z: Invalid input: expected number, received undefined/);
+    const b = run([file("standard.json", { ...(rooftop(1, 5, 5) as any), standard: "fcc-1996" })]);
+    expect(b.code).toBe(2);
+    expect(b.stderr).toMatch(/standard: Invalid option: expected one of "fcc"/);
   });
 
   it("a frequency outside the standard's table: exit 2 naming emitters[i].frequencyMHz", () => {
