@@ -12,12 +12,12 @@ export const roleLabels: Record<Role, string> = {
 };
 
 export const roleSummaries: Record<Role, string> = {
-  owner: "Everything in the organisation; invites members and sets roles.",
-  engineer: "Clients, sites, emitters, visits and readings; runs assessments; drafts documents.",
-  reviewer: "All an engineer may, plus approving and issuing documents someone else wrote.",
-  billing: "Invoices, payments, refunds and prices; reads sites.",
-  client: "Its own sites' issued letters, maps and certificates.",
-  regulator: "Assessments filed to its authority; read-only.",
+  owner: "Everything in the organisation: you invite members and set their roles.",
+  engineer: "You record clients, sites, emitters, visits and readings, run assessments and draft documents.",
+  reviewer: "Everything an engineer does, plus approving and issuing documents written by someone else.",
+  billing: "You handle invoices, payments, refunds and prices, and can read sites.",
+  client: "You see your own sites' issued letters, maps and certificates.",
+  regulator: "You see the assessments filed to your authority, read-only.",
 };
 
 export function isRole(value: unknown): value is Role {

@@ -6,7 +6,7 @@ export function TableShell<Row>({ columns, rows, caption, empty }: { columns: Co
   const table = useReactTable({ data: rows, columns, getCoreRowModel: getCoreRowModel() });
   if (rows.length === 0) return <EmptyState title={empty} />;
   return (
-    <div className="overflow-x-auto rounded-card border border-ink-200">
+    <div className="relative overflow-x-auto rounded-card border border-ink-200">
       <table className="min-w-full divide-y divide-ink-200 text-sm">
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-ink-50">

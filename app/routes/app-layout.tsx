@@ -34,12 +34,12 @@ export default function AppLayout({ loaderData }: Route.ComponentProps) {
         Skip to content
       </a>
       <header className="border-b border-ink-800 bg-ink-900 text-ink-100">
-        <div className="mx-auto flex max-w-6xl items-center gap-6 px-5 py-3">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-5 py-3">
           <NavLink to="/" className="flex items-center gap-2 font-semibold text-white">
             <img src="/favicon.svg" alt="" className="h-7 w-7" />
             Isotrope
           </NavLink>
-          <nav aria-label="Main" className="flex flex-1 gap-1">
+          <nav aria-label="Main" className="order-last -mx-2 flex w-full gap-1 overflow-x-auto sm:order-none sm:mx-0 sm:w-auto sm:flex-1">
             {navFor(role).map((s) => (
               <NavLink
                 key={s.path}
@@ -54,7 +54,7 @@ export default function AppLayout({ loaderData }: Route.ComponentProps) {
             ))}
           </nav>
           {person ? (
-            <div className="flex items-center gap-3 text-sm">
+            <div className="ml-auto flex items-center gap-3 text-sm">
               <span className="hidden text-right leading-tight sm:block">
                 <span className="block text-white">{person.name}</span>
                 <span className="block text-xs text-ink-200">
@@ -62,7 +62,7 @@ export default function AppLayout({ loaderData }: Route.ComponentProps) {
                 </span>
               </span>
               <Form method="post" action="/sign-out">
-                <button type="submit" className="rounded-md px-3 py-1.5 text-ink-200 ring-1 ring-ink-600 hover:bg-ink-800 hover:text-white">
+                <button type="submit" className="whitespace-nowrap rounded-md px-3 py-1.5 text-ink-200 ring-1 ring-ink-600 hover:bg-ink-800 hover:text-white">
                   Sign out
                 </button>
               </Form>
