@@ -172,6 +172,8 @@ describe("work-area planner", () => {
   });
 });
 
+// The cylindrical model and its vertical extent: FCC OET Bulletin 65 (1997) §2, eqs. (3)–(4); the
+// crossover R* = G·h/2 where the cylindrical and spherical values meet is derived from them (from memory of IEC 62232).
 describe("models in the grid", () => {
   it("cylindrical applies within the aperture's vertical extent, spherical outside it", () => {
     const e = { id: "c", frequencyMHz: 1900, powerW: 100, gainDbi: 10, position: { x: 0, y: 0, z: 10 }, model: "cylindrical" as const, apertureM: 2 };
@@ -208,5 +210,61 @@ describe("models in the grid", () => {
       const [inside, outside] = evaluate({ standard: "fcc", tier: "general", emitters: [e], points: pts }).points!;
       expect(outside.totalPercent).toBeGreaterThanOrEqual(inside.totalPercent * (1 - 1e-5));
     }
+  });
+});
+
+describe("bad input names the innermost field and what was expected (common practice, no source)", () => {
+  const fail = (r: unknown) => {
+    const p = parseRequest(r);
+    if (p.ok) throw new Error("expected a validation failure");
+    return p;
+  };
+
+  it("a pattern missing a field names that field", () => {
+    const r = site() as any;
+    delete r.emitters[0].pattern.vBeamwidthDeg;
+    const p = fail(r);
+    expect(p.field).toBe("emitters[0].pattern.vBeamwidthDeg");
+    expect(p.message).toMatch(/expected number, received undefined/);
+  });
+
+  it("a misspelt pattern type lists the known types", () => {
+    const r = site() as any;
+    r.emitters[1].pattern.type = "3gpp-38901";
+    const p = fail(r);
+    expect(p.field).toBe("emitters[1].pattern.type");
+    expect(p.message).toMatch(/'3gpp-38\.901'/);
+    expect(p.message).toMatch(/'tabulated'/);
+  });
+
+  it("a pattern that is neither the word nor an object says both", () => {
+    const r = site() as any;
+    r.emitters[2].pattern = "omni";
+    const p = fail(r);
+    expect(p.field).toBe("emitters[2].pattern");
+    expect(p.message).toMatch(/expected "isotropic"; or expected object/);
+  });
+
+  it("a work area naming an emitter the request does not have is refused, not ignored", () => {
+    const r = { ...site(), workArea: { polygon: [[3, 3], [9, 3], [9, 8]], adjustable: ["A", "a"] } } as any;
+    const p = fail(r);
+    expect(p.field).toBe("workArea.adjustable[1]");
+    expect(p.message).toMatch(/"a" is not the id of any emitter/);
+  });
+});
+
+describe("FCC exemption screening outside the rule's frequency table", () => {
+  it("does not apply, and does not stop a request under another standard (47 CFR §1.1307(b)(3)(i)(C) covers 0.3 MHz–100 GHz, from memory)", () => {
+    const r: EvaluationRequestInput = {
+      standard: "icnirp-2020",
+      tier: "general",
+      emitters: [{ id: "MM", frequencyMHz: 200_000, powerW: 1, gainDbi: 30, position: { x: 0, y: 0, z: 5 } }],
+      points: [{ x: 3, y: 0, z: 2 }],
+      screening: { distanceM: 3 },
+    };
+    const out = evaluate(r);
+    expect(out.emitters[0].exemption).toMatchObject({ applicable: false, exempt: false, thresholdErpW: null });
+    expect(out.emitters[0].exemption!.reason).toMatch(/outside the §1\.1307\(b\)\(3\)\(i\)\(C\) table/);
+    expect(out.points![0].totalPercent).toBeGreaterThan(0);
   });
 });

@@ -27,15 +27,35 @@ export function fieldPath(path: readonly PropertyKey[]): string {
   return s || "(request)";
 }
 
+type Issue = { code: string; path: PropertyKey[]; message: string; keys?: string[]; errors?: Issue[][] };
+
+/**
+ * The innermost cause of a validation issue, with its absolute path. A union
+ * (e.g. a pattern: "isotropic" or an object by `type`) reports the branch that
+ * got furthest into the input; branches that failed at the same depth are
+ * listed together.
+ */
+function innermost(issue: Issue, base: PropertyKey[] = []): { path: PropertyKey[]; message: string } {
+  const here = [...base, ...issue.path];
+  if (issue.code === "invalid_union" && issue.errors?.some((b) => b.length)) {
+    const branches = issue.errors.filter((b) => b.length).map((b) => innermost(b[0], here));
+    const depth = Math.max(...branches.map((b) => b.path.length));
+    const best = branches.filter((b) => b.path.length === depth);
+    if (best.length === 1) return best[0];
+    return { path: best[0].path, message: best.map((b) => b.message.replace(/^Invalid input: /, "")).join("; or ") };
+  }
+  // An unknown key is reported on its object; name the key itself.
+  if (issue.code === "unrecognized_keys" && issue.keys?.length) return { path: [...here, issue.keys[0]], message: issue.message };
+  return { path: here, message: issue.message };
+}
+
 /** Validate a request (any JSON value); on failure the first offending field and why. */
 export function parseRequest(json: unknown): ParseResult {
   const r = requestSchema.safeParse(json);
   if (r.success) return { ok: true, request: r.data };
-  const issue = r.error.issues[0];
-  // An unknown key is reported on its object; name the key itself.
-  const path = issue.code === "unrecognized_keys" ? [...issue.path, issue.keys[0]] : issue.path;
-  const field = fieldPath(path);
-  return { ok: false, field, message: `${field}: ${issue.message}` };
+  const cause = innermost(r.error.issues[0] as unknown as Issue);
+  const field = fieldPath(cause.path);
+  return { ok: false, field, message: `${field}: ${cause.message}` };
 }
 
 export interface PreparedRequest {
@@ -125,13 +145,8 @@ export function evaluateParsed(req: EvaluationRequest, gridPercent?: Float64Arra
     const d = req.screening.distanceM;
     response.emitters.forEach((em, i) => {
       const e = req.emitters[i];
-      try {
-        // Time-averaged ERP (duty factor applied), as the rule's "maximum time-averaged ERP".
-        em.exemption = fccMpeExemption({ frequencyMHz: e.frequencyMHz, erpW: em.erpW * e.dutyFactor, distanceM: d });
-      } catch (err) {
-        if (err instanceof EngineInputError) throw new EngineInputError(`emitters[${i}].frequencyMHz`, err.message);
-        throw err;
-      }
+      // Time-averaged ERP (duty factor applied), as the rule's "maximum time-averaged ERP".
+      em.exemption = fccMpeExemption({ frequencyMHz: e.frequencyMHz, erpW: em.erpW * e.dutyFactor, distanceM: d });
     });
   }
   if (req.points) {

@@ -35,7 +35,8 @@ export interface ExemptionResult {
   frequencyMHz: number;
   distanceM: number;
   erpW: number;
-  thresholdErpW: number;
+  /** Null where the frequency is outside the rule's table. */
+  thresholdErpW: number | null;
   /** λ/2π: the table applies only at R ≥ this distance. */
   minDistanceM: number;
   applicable: boolean;
@@ -43,12 +44,22 @@ export interface ExemptionResult {
   reason: string;
 }
 
-/** Screen one source: exempt when R ≥ λ/2π and ERP ≤ the threshold. */
+const inTable = (f: number) => f >= ROWS[0].lo && f <= ROWS[ROWS.length - 1].hi;
+
+/**
+ * Screen one source: exempt when R ≥ λ/2π and ERP ≤ the threshold. Outside the
+ * table's 0.3 MHz–100 GHz the exemption does not apply (not an error: the
+ * request may be under another standard).
+ */
 export function fccMpeExemption(input: { frequencyMHz: number; erpW: number; distanceM: number }): ExemptionResult {
   if (!(input.distanceM > 0)) throw new EngineInputError("distanceM", "must be > 0");
   if (!(input.erpW >= 0)) throw new EngineInputError("erpW", "must be ≥ 0");
-  const threshold = fccExemptionThresholdErpW(input.frequencyMHz, input.distanceM);
   const minD = exemptionMinDistanceM(input.frequencyMHz);
+  if (!inTable(input.frequencyMHz)) {
+    const reason = `${input.frequencyMHz} MHz is outside the §1.1307(b)(3)(i)(C) table (0.3–100 000 MHz): the MPE-based exemption does not apply`;
+    return { ...input, thresholdErpW: null, minDistanceM: minD, applicable: false, exempt: false, reason };
+  }
+  const threshold = fccExemptionThresholdErpW(input.frequencyMHz, input.distanceM);
   const applicable = input.distanceM >= minD;
   const exempt = applicable && input.erpW <= threshold;
   const reason = !applicable

@@ -69,10 +69,12 @@ describe("aperture (dish) antenna (OET-65 eqs. (11)–(16))", () => {
     expect(snf).toBeCloseTo(19.4523, 3);
   });
   it("transition region S_t = S_nf·R_nf/R (20 m → 12.847 W/m²); far field EIRP/(4πR²)", () => {
-    expect(apertureTransitionWm2(snf, rnf, 20)).toBeCloseTo((19.4523 * 13.2091) / 20, 2);
-    expect(apertureOnAxisWm2(10, g, 1.2, lambda, 5, 0.55)).toBeCloseTo(snf, 9);
-    expect(apertureOnAxisWm2(10, g, 1.2, lambda, 20, 0.55)).toBeCloseTo(apertureTransitionWm2(snf, rnf, 20), 9);
-    expect(apertureOnAxisWm2(10, g, 1.2, lambda, 50, 0.55)).toBeCloseTo(sphericalWm2(10 * g, 50), 9);
+    // By hand: 19.4523 × 13.2091 / 20 = 12.847; G = 0.55(π·1.2/λ)² = 10 523.7, 10·G/(4π·50²) = 3.3498 W/m².
+    expect(apertureTransitionWm2(snf, rnf, 20)).toBeCloseTo(12.847, 2);
+    expect(apertureOnAxisWm2(10, g, 1.2, lambda, 5, 0.55)).toBeCloseTo(19.4523, 3);
+    expect(apertureOnAxisWm2(10, g, 1.2, lambda, 20, 0.55)).toBeCloseTo(12.847, 2);
+    expect(g).toBeCloseTo(10_523.7, 0);
+    expect(apertureOnAxisWm2(10, g, 1.2, lambda, 50, 0.55)).toBeCloseTo(3.3498, 3);
   });
   it("efficiency from gain: G = η(πD/λ)² ⇒ η = Gλ²/(πD)²", () => {
     expect(apertureEfficiency(g, 1.2, lambda)).toBeCloseTo(0.55, 12);
@@ -150,7 +152,11 @@ describe("compliance distances by model", () => {
       emitters: [{ id: "d", frequencyMHz: 11_000, powerW: 10, gainDbi: 40.4, model: "aperture", apertureM: 1.2, position: { x: 0, y: 0, z: 0 } }],
       points: [{ x: 0, y: 1, z: 0 }],
     }).emitters[0].complianceDistanceM;
-    expect(snf).toBeGreaterThan(10);
-    expect(d).toBeCloseTo((rnf * snf) / 10, 6);
+    // By hand: η = Gλ²/(πD)² = 0.57305, S_nf = 16ηP/(πD²) = 20.268 W/m², R_nf = 13.209 m,
+    // R = R_nf·S_nf/S_lim = 26.772 m, inside the transition (far field from 0.6D²/λ = 31.70 m).
+    expect(eta).toBeCloseTo(0.57305, 4);
+    expect(snf).toBeCloseTo(20.268, 2);
+    expect(rnf).toBeCloseTo(13.209, 3);
+    expect(d).toBeCloseTo(26.772, 2);
   });
 });

@@ -1,4 +1,7 @@
-/** Property tests (fast-check) of the evaluation as a whole. */
+/**
+ * Property tests (fast-check) of the evaluation as a whole: common practice, no source,
+ * beyond the 1/R² law of the far field (FCC OET Bulletin 65 §2, eq. (3)).
+ */
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { EngineInputError } from "./errors";

@@ -25,6 +25,7 @@ const cutPoint = z.strictObject({ angleDeg: z.number(), attenuationDb: range(0, 
 
 export const patternSchema = z.union([
   z.literal("isotropic"),
+  z.discriminatedUnion("type", [
   z.strictObject({ type: z.literal("isotropic") }),
   z.strictObject({
     type: z.literal("3gpp-38.901"),
@@ -47,6 +48,7 @@ export const patternSchema = z.union([
     vertical: z.array(cutPoint).check(z.minLength(1), z.maxLength(3600)),
     maxAttenuationDb: z.optional(range(0, 200)),
   }),
+  ]),
 ]);
 
 const xyz = z.strictObject({ x: z.number(), y: z.number(), z: z.number() });
@@ -144,6 +146,9 @@ export const requestSchema = z
         if (ids.has(e.id)) ctx.addIssue({ code: "custom", path: ["emitters", i, "id"], message: `duplicate id "${e.id}"` });
         ids.add(e.id);
       });
+      r.workArea?.adjustable?.forEach((id, k) => {
+        if (!ids.has(id)) ctx.addIssue({ code: "custom", path: ["workArea", "adjustable", k], message: `"${id}" is not the id of any emitter` });
+      });
       let samples = r.points?.length ?? 0;
       if (r.grid) {
         const g = r.grid;
@@ -205,7 +210,7 @@ export const responseSchema = z.object({
           frequencyMHz: z.number(),
           distanceM: z.number(),
           erpW: z.number(),
-          thresholdErpW: z.number(),
+          thresholdErpW: z.nullable(z.number()),
           minDistanceM: z.number(),
           applicable: z.boolean(),
           exempt: z.boolean(),
