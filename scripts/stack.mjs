@@ -2,7 +2,7 @@
 // project folder, the mail catcher, the payment fake, migrations, the demo seed,
 // then the app (start/dev) or every test suite (test). Plain Node, no build step.
 import { spawn, spawnSync } from "node:child_process";
-import { randomBytes } from "node:crypto";
+import { createHash, randomBytes } from "node:crypto";
 import { existsSync, mkdirSync, readdirSync, readFileSync, writeFileSync, chmodSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join, resolve } from "node:path";
@@ -109,7 +109,7 @@ function pgDataDir(name) {
   run("chown", ["postgres:postgres", local]);
   const reachable = spawnSync("runuser", ["-u", "postgres", "--", "test", "-w", local]).status === 0;
   if (reachable) return local;
-  const fallback = join(tmpdir(), `isotrope-${Buffer.from(root).toString("hex").slice(-16)}-${name}`);
+  const fallback = join(tmpdir(), `isotrope-${createHash("sha256").update(root).digest("hex").slice(0, 12)}-${name}`);
   mkdirSync(fallback, { recursive: true });
   run("chown", ["postgres:postgres", fallback]);
   log(`the postgres user cannot reach ${local}; using ${fallback}`);

@@ -1,14 +1,15 @@
 /** The command line end to end: spawn `node scripts/evaluate.mjs`, JSON in, JSON out. */
 import { spawnSync } from "node:child_process";
-import { mkdtempSync, writeFileSync } from "node:fs";
+import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { describe, expect, it } from "vitest";
+import { afterAll, describe, expect, it } from "vitest";
 import { evaluate, parseRequest } from "../../app/engine/evaluate";
 import type { EvaluationRequestInput } from "../../app/engine/schema";
 
 const ROOT = join(__dirname, "..", "..");
 const dir = mkdtempSync(join(tmpdir(), "isotrope-cli-"));
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
 function run(args: string[], input?: string, env: Record<string, string> = {}) {
   const r = spawnSync(process.execPath, [join(ROOT, "scripts", "evaluate.mjs"), ...args], {
