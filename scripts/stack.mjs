@@ -20,6 +20,9 @@ const profiles = {
   test: { pgPort: 54339, db: "isotrope_test", smtp: 1035, mailWeb: 1090, stripe: 12121, app: 3100 },
 };
 const profile = mode === "test" ? profiles.test : profiles.start;
+// The test build goes to its own folder so that `npm test` never replaces the assets of a running `npm start`.
+const buildDir = mode === "test" ? "build-test" : "build";
+process.env.BUILD_DIR = buildDir;
 const num = (name, fallback) => Number(process.env[name] ?? fallback);
 const ports = {
   pg: num(mode === "test" ? "TEST_PG_PORT" : "PG_PORT", profile.pgPort),
@@ -216,7 +219,7 @@ async function startApp(env) {
     background("app", join(root, "node_modules/.bin/react-router"), ["dev", "--host", "127.0.0.1", "--port", String(ports.app), "--strictPort"], env);
   } else {
     if (mode !== "test") run("npm", ["run", "-s", "build"], { cwd: root });
-    background("app", join(root, "node_modules/.bin/react-router-serve"), [join(root, "build/server/index.js")], { ...env, HOST: "127.0.0.1", NODE_ENV: "production" });
+    background("app", join(root, "node_modules/.bin/react-router-serve"), [join(root, buildDir, "server/index.js")], { ...env, HOST: "127.0.0.1", NODE_ENV: "production" });
   }
   await waitForHttp(`${env.APP_URL}/api/health`, "the app", 120);
 }
