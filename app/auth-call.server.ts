@@ -5,6 +5,9 @@ import { env } from "./env.server";
 
 const forwarded = ["cookie", "user-agent", "x-forwarded-for", "origin", "referer"];
 
+/** What a person is told when better-auth's rate limit answers 429. */
+export const TOO_MANY_ATTEMPTS = "Too many attempts. Wait a minute, then try again.";
+
 export type AuthResult = { ok: boolean; status: number; code?: string; message?: string; body: unknown; headers: Headers };
 
 export async function callAuth(request: Request, path: string, body?: Record<string, unknown>): Promise<AuthResult> {

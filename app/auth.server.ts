@@ -83,5 +83,3 @@ export const auth = betterAuth({
     }),
   ],
 });
-
-export type AuthSession = typeof auth.$Infer.Session;

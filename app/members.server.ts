@@ -48,6 +48,27 @@ export async function listPendingInvitations(organizationId: string) {
     .orderBy(asc(invitation.email));
 }
 
+/** Member and waiting-invitation counts for the overview. */
+export async function teamCounts(organizationId: string) {
+  const [members, pending] = await Promise.all([
+    db.select({ n: sql<number>`count(*)::int` }).from(member).where(eq(member.organizationId, organizationId)),
+    db
+      .select({ n: sql<number>`count(*)::int` })
+      .from(invitation)
+      .where(and(eq(invitation.organizationId, organizationId), eq(invitation.status, "pending"), gt(invitation.expiresAt, new Date()))),
+  ]);
+  return { members: members[0]?.n ?? 0, pending: pending[0]?.n ?? 0 };
+}
+
+/** Invitations still open for an address, from any organisation (the welcome page). */
+export async function invitationsFor(email: string) {
+  return db
+    .select({ id: invitation.id, organizationName: organization.name, role: invitation.role })
+    .from(invitation)
+    .innerJoin(organization, eq(organization.id, invitation.organizationId))
+    .where(and(eq(invitation.email, email), eq(invitation.status, "pending"), gt(invitation.expiresAt, new Date())));
+}
+
 export async function createOrganization(userId: string, name: string) {
   return db.transaction(async (tx) => {
     const existing = await tx.select({ id: member.id }).from(member).where(eq(member.userId, userId));

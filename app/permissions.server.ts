@@ -1,6 +1,6 @@
 // The one guard every loader and action starts with: who is signed in, in which
 // organisation, with which role. Queries downstream scope by `member.organizationId`.
-import { and, asc, eq } from "drizzle-orm";
+import { asc, eq } from "drizzle-orm";
 import { data, redirect } from "react-router";
 import { auth } from "./auth.server";
 import { db, schema } from "./db.server";
@@ -66,14 +66,4 @@ export async function requireApiMember(request: Request, options: { roles?: read
     throw Response.json({ error: "Your role does not allow this." }, { status: 403 });
   }
   return { ...membership, user: signedIn.user };
-}
-
-/** A member row of the caller's own organisation, or 404. */
-export async function requireOwnMember(organizationId: string, memberId: string) {
-  const [row] = await db
-    .select()
-    .from(schema.member)
-    .where(and(eq(schema.member.id, memberId), eq(schema.member.organizationId, organizationId)));
-  if (!row) throw data({ message: "No such member in your organisation." }, { status: 404 });
-  return row;
 }

@@ -31,8 +31,7 @@ export const sections = {
   account: { path: "/account", label: "Account", roles: roles },
 } as const satisfies Record<string, { path: string; label: string; roles: readonly Role[] }>;
 
-export type Section = keyof typeof sections;
-
-export function mayOpen(role: Role, section: Section) {
-  return (sections[section].roles as readonly Role[]).includes(role);
+/** The sections a role may open, in navigation order. */
+export function sectionsFor(role: Role) {
+  return Object.values(sections).filter((s) => (s.roles as readonly Role[]).includes(role));
 }

@@ -1,7 +1,7 @@
 import { getFormProps, useForm } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
 import { data, Form } from "react-router";
-import { callAuth, cookiesOf } from "~/auth-call.server";
+import { callAuth, cookiesOf, TOO_MANY_ATTEMPTS } from "~/auth-call.server";
 import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
 import { Card, PageHeader } from "~/components/panels";
@@ -30,8 +30,11 @@ export async function action({ request }: Route.ActionArgs) {
     revokeOtherSessions: true,
   });
   if (!result.ok) {
-    const message = result.status === 429 ? "Too many attempts. Wait a minute, then try again." : "Your current password is not right.";
-    return data(submission.reply({ ...hide, fieldErrors: result.status === 429 ? {} : { current: [message] }, formErrors: result.status === 429 ? [message] : [] }), { status: result.status === 429 ? 429 : 400 });
+    const reply =
+      result.status === 429
+        ? submission.reply({ ...hide, formErrors: [TOO_MANY_ATTEMPTS] })
+        : submission.reply({ ...hide, fieldErrors: { current: ["Your current password is not right."] } });
+    return data(reply, { status: result.status === 429 ? 429 : 400 });
   }
   return redirectWithFlash("/account", { kind: "success", message: "Password changed. Other devices are signed out." }, { headers: cookiesOf(result) });
 }

@@ -2,7 +2,7 @@ import { data, Form, NavLink, Outlet } from "react-router";
 import { FlashMessage } from "~/components/panels";
 import { takeFlash } from "~/flash.server";
 import { findMembership, getSignedIn } from "~/permissions.server";
-import { roleLabels, sections, type Role } from "~/roles";
+import { roleLabels, sectionsFor } from "~/roles";
 import type { Route } from "./+types/app-layout";
 
 // The shell only reads who is signed in; each page below runs its own guard.
@@ -21,11 +21,6 @@ export async function loader({ request }: Route.LoaderArgs) {
   );
 }
 
-function navFor(role: Role | null) {
-  if (!role) return [];
-  return Object.values(sections).filter((s) => (s.roles as readonly Role[]).includes(role));
-}
-
 export default function AppLayout({ loaderData }: Route.ComponentProps) {
   const { person, role, organizationName, flash } = loaderData;
   return (
@@ -40,7 +35,7 @@ export default function AppLayout({ loaderData }: Route.ComponentProps) {
             Isotrope
           </NavLink>
           <nav aria-label="Main" className="order-last -mx-2 flex w-full gap-1 overflow-x-auto sm:order-none sm:mx-0 sm:w-auto sm:flex-1">
-            {navFor(role).map((s) => (
+            {(role ? sectionsFor(role) : []).map((s) => (
               <NavLink
                 key={s.path}
                 to={s.path}

@@ -1,6 +1,6 @@
 import { Card, PageHeader } from "~/components/panels";
 import { RfCautions } from "~/components/cautions";
-import { listMembers, listPendingInvitations } from "~/members.server";
+import { teamCounts } from "~/members.server";
 import { requireMember } from "~/permissions.server";
 import { roleLabels, roleSummaries } from "~/roles";
 import { ButtonLink } from "~/components/button";
@@ -10,10 +10,7 @@ export const meta: Route.MetaFunction = () => [{ title: "Overview · Isotrope" }
 
 export async function loader({ request }: Route.LoaderArgs) {
   const member = await requireMember(request);
-  const team =
-    member.role === "owner"
-      ? { members: (await listMembers(member.organizationId)).length, pending: (await listPendingInvitations(member.organizationId)).length }
-      : null;
+  const team = member.role === "owner" ? await teamCounts(member.organizationId) : null;
   return { name: member.user.name, role: member.role, organizationName: member.organizationName, team };
 }
 

@@ -17,12 +17,14 @@ export const meta: Route.MetaFunction = () => [{ title: "Invitation · Isotrope"
 async function load(request: Request, invitationId: string) {
   const invitation = await findInvitation(invitationId);
   if (!invitation) throw data({ message: "There is no such invitation. Check the link in your e-mail." }, { status: 404 });
-  const signedIn = await getSignedIn(request);
-  return { invitation, signedInEmail: signedIn?.user.email ?? null, signedIn };
+  return { invitation, signedIn: await getSignedIn(request) };
 }
 
+/** A form-level error in Conform's reply shape. */
+const refusal = (message: string, status: number) => data({ status: "error" as const, error: { "": [message] } }, { status });
+
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const { invitation, signedInEmail } = await load(request, params.invitationId);
+  const { invitation, signedIn } = await load(request, params.invitationId);
   const view = {
     id: invitation.id,
     email: invitation.email,
@@ -30,14 +32,14 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     roleLabel: isRole(invitation.role) ? roleLabels[invitation.role] : invitation.role,
     problem: invitation.problem,
     hasAccount: invitation.hasAccount,
-    signedInEmail,
+    signedInEmail: signedIn?.user.email ?? null,
   };
   return data(view, { status: invitation.problem ? 410 : 200 });
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
   const { invitation, signedIn } = await load(request, params.invitationId);
-  if (invitation.problem) return data({ status: "error" as const, error: { "": [invitation.problem] } }, { status: 410 });
+  if (invitation.problem) return refusal(invitation.problem, 410);
   try {
     if (signedIn) {
       if (signedIn.user.email !== invitation.email) throw new DomainError("This invitation is for another e-mail address.", 403);
@@ -51,7 +53,7 @@ export async function action({ request, params }: Route.ActionArgs) {
     if (!result.ok) return redirectWithFlash("/sign-in", { kind: "success", message: "Your account is ready. Sign in to continue." });
     return redirect("/", { headers: cookiesOf(result) });
   } catch (error) {
-    if (error instanceof DomainError) return data({ status: "error" as const, error: { "": [error.message] } }, { status: error.status });
+    if (error instanceof DomainError) return refusal(error.message, error.status);
     throw error;
   }
 }

@@ -1,7 +1,7 @@
 import { getFormProps, useForm } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
 import { data, Form, Link, redirect, useNavigation, useSearchParams } from "react-router";
-import { callAuth, cookiesOf } from "~/auth-call.server";
+import { callAuth, cookiesOf, TOO_MANY_ATTEMPTS } from "~/auth-call.server";
 import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
 import { inputProps } from "~/forms/conform";
@@ -24,7 +24,7 @@ export async function action({ request }: Route.ActionArgs) {
   if (result.ok) return redirect(safeRedirect(redirectTo), { headers: cookiesOf(result) });
   const message =
     result.status === 429
-      ? "Too many sign-in attempts. Wait a minute, then try again."
+      ? TOO_MANY_ATTEMPTS
       : result.code === "EMAIL_NOT_VERIFIED"
         ? "Confirm your e-mail address first: we have sent you a new link."
         : "That e-mail and password do not match an account.";

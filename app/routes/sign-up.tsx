@@ -1,7 +1,7 @@
 import { getFormProps, useForm } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
 import { data, Form, Link, redirect, useNavigation } from "react-router";
-import { callAuth } from "~/auth-call.server";
+import { callAuth, TOO_MANY_ATTEMPTS } from "~/auth-call.server";
 import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
 import { inputProps } from "~/forms/conform";
@@ -32,7 +32,7 @@ export async function action({ request }: Route.ActionArgs) {
   const result = await callAuth(request, "/sign-up/email", { name, email, password, callbackURL: "/verified" });
   if (result.ok) return redirect(`/check-email?email=${encodeURIComponent(email)}`);
   if (result.status === 429) {
-    return data(submission.reply({ formErrors: ["Too many attempts. Wait a minute, then try again."] }), { status: 429 });
+    return data(submission.reply({ formErrors: [TOO_MANY_ATTEMPTS] }), { status: 429 });
   }
   return data(submission.reply({ formErrors: [result.message ?? "The account could not be created."], hideFields: ["password", "confirm"] }), { status: 400 });
 }

@@ -1,15 +1,13 @@
 import { getFormProps, useForm } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
-import { and, eq, gt } from "drizzle-orm";
 import { data, Form, Link, redirect } from "react-router";
 import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
 import { Card, PageHeader } from "~/components/panels";
-import { db, schema } from "~/db.server";
 import { inputProps } from "~/forms/conform";
 import { organizationSchema } from "~/forms/auth";
 import { redirectWithFlash } from "~/flash.server";
-import { createOrganization, DomainError } from "~/members.server";
+import { createOrganization, DomainError, invitationsFor } from "~/members.server";
 import { findMembership, requireUser } from "~/permissions.server";
 import type { Route } from "./+types/welcome";
 
@@ -18,12 +16,7 @@ export const meta: Route.MetaFunction = () => [{ title: "Set up your organisatio
 export async function loader({ request }: Route.LoaderArgs) {
   const { user } = await requireUser(request);
   if (await findMembership(user.id)) throw redirect("/");
-  const invitations = await db
-    .select({ id: schema.invitation.id, organizationName: schema.organization.name, role: schema.invitation.role })
-    .from(schema.invitation)
-    .innerJoin(schema.organization, eq(schema.organization.id, schema.invitation.organizationId))
-    .where(and(eq(schema.invitation.email, user.email), eq(schema.invitation.status, "pending"), gt(schema.invitation.expiresAt, new Date())));
-  return { invitations };
+  return { invitations: await invitationsFor(user.email) };
 }
 
 export async function action({ request }: Route.ActionArgs) {
