@@ -1,9 +1,9 @@
 // Seeds the invented demo scenario, once, into an empty database.
 import { randomUUID } from "node:crypto";
 import { sql as rawSql } from "drizzle-orm";
-import { auth } from "../app/auth.server";
-import { db, schema, sql } from "../app/db.server";
-import type { Role } from "../app/roles";
+import { auth } from "../app/features/auth/auth.server";
+import { db, schema, sql } from "../app/infra/db.server";
+import type { Role } from "../app/lib/roles";
 
 const password = process.env.DEMO_PASSWORD ?? "isotrope-demo";
 

@@ -1,8 +1,8 @@
 import { data, Form, NavLink, Outlet } from "react-router";
 import { FlashMessage } from "~/components/panels";
-import { takeFlash } from "~/flash.server";
-import { findMembership, getSignedIn } from "~/permissions.server";
-import { roleLabels, sectionsFor } from "~/roles";
+import { takeFlash } from "~/infra/flash.server";
+import { findMembership, getSignedIn } from "~/features/auth/guard.server";
+import { roleLabels, sectionsFor } from "~/lib/roles";
 import type { Route } from "./+types/app-layout";
 
 // The shell only reads who is signed in; each page below runs its own guard.

@@ -4,11 +4,13 @@ import { data, Form, Link, redirect } from "react-router";
 import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
 import { Card, PageHeader } from "~/components/panels";
-import { inputProps } from "~/forms/conform";
-import { organizationSchema } from "~/forms/auth";
-import { redirectWithFlash } from "~/flash.server";
-import { createOrganization, DomainError, invitationsFor } from "~/members.server";
-import { findMembership, requireUser } from "~/permissions.server";
+import { inputProps } from "~/lib/conform";
+import { organizationSchema } from "~/features/members/schemas";
+import { redirectWithFlash } from "~/infra/flash.server";
+import { invitationsFor } from "~/features/members/invitations.server";
+import { createOrganization } from "~/features/members/organizations.server";
+import { domainErrorReply } from "~/lib/domain-error";
+import { findMembership, requireUser } from "~/features/auth/guard.server";
 import type { Route } from "./+types/welcome";
 
 export const meta: Route.MetaFunction = () => [{ title: "Set up your organisation · Isotrope" }];
@@ -26,8 +28,7 @@ export async function action({ request }: Route.ActionArgs) {
   try {
     await createOrganization(user.id, submission.value.name);
   } catch (error) {
-    if (error instanceof DomainError) return data(submission.reply({ formErrors: [error.message] }), { status: error.status });
-    throw error;
+    return domainErrorReply(error, submission);
   }
   return redirectWithFlash("/", { kind: "success", message: `${submission.value.name} is set up. Invite your colleagues from Members.` });
 }

@@ -3,17 +3,17 @@ import { randomUUID } from "node:crypto";
 import { createEmailVerificationToken } from "better-auth/api";
 import { and, eq, like } from "drizzle-orm";
 import { beforeAll, describe, expect, it, vi } from "vitest";
-import { db, schema } from "~/db.server";
-import { env } from "~/env.server";
-import * as account from "~/routes/account";
-import * as apiAuth from "~/routes/api.auth";
-import * as forgot from "~/routes/forgot-password";
-import * as invite from "~/routes/invite";
-import * as members from "~/routes/members";
-import * as reset from "~/routes/reset-password";
-import * as signIn from "~/routes/sign-in";
-import * as signUp from "~/routes/sign-up";
-import * as verified from "~/routes/verified";
+import { db, schema } from "~/infra/db.server";
+import { env } from "~/infra/env.server";
+import * as account from "~/routes/account/account";
+import * as apiAuth from "~/routes/api/auth";
+import * as forgot from "~/routes/auth/forgot-password";
+import * as invite from "~/routes/auth/invite";
+import * as members from "~/routes/members/members";
+import * as reset from "~/routes/auth/reset-password";
+import * as signIn from "~/routes/auth/sign-in";
+import * as signUp from "~/routes/auth/sign-up";
+import * as verified from "~/routes/auth/verified";
 import { createOrg, createSession, createUser, freshIp, makeRequest, outcome, password, type Org } from "./fixtures";
 
 const args = (request: Request, params: Record<string, string> = {}) => ({ request, params, context: {} }) as never;
@@ -235,7 +235,7 @@ describe("health", () => {
     delete cache.isotropeSql; // db.server.ts keeps one connection pool per process
     process.env.DATABASE_URL = "postgres://nobody@127.0.0.1:9/none";
     try {
-      const health = await import("~/routes/api.health");
+      const health = await import("~/routes/api/health");
       const response = (await health.loader()) as Response;
       expect(response.status).toBe(503);
       expect(await response.json()).toEqual({ status: "degraded", database: "down" });
@@ -247,7 +247,7 @@ describe("health", () => {
   });
 
   it("answers ok when it is up", async () => {
-    const health = await import("~/routes/api.health");
+    const health = await import("~/routes/api/health");
     const response = (await health.loader()) as Response;
     expect(response.status).toBe(200);
     expect(await response.json()).toEqual({ status: "ok", database: "ok" });

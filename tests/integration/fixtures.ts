@@ -1,9 +1,9 @@
 // Builds organisations, members and sessions straight in the database, so tests skip the sign-in pages.
 import { createHmac, randomBytes, randomUUID } from "node:crypto";
-import { auth } from "~/auth.server";
-import { db, schema } from "~/db.server";
-import { env } from "~/env.server";
-import { roles, type Role } from "~/roles";
+import { auth } from "~/features/auth/auth.server";
+import { db, schema } from "~/infra/db.server";
+import { env } from "~/infra/env.server";
+import { roles, type Role } from "~/lib/roles";
 
 export type Person = { userId: string; memberId: string; email: string; cookie: string };
 export type Org = { id: string; name: string; people: Record<Role, Person> };

@@ -2,9 +2,9 @@
 import { randomUUID } from "node:crypto";
 import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
-import { db, schema } from "~/db.server";
-import * as apiMe from "~/routes/api.v1.me";
-import * as members from "~/routes/members";
+import { db, schema } from "~/infra/db.server";
+import * as apiMe from "~/routes/api/v1/me";
+import * as members from "~/routes/members/members";
 import { createOrg, makeRequest, outcome, type Org } from "./fixtures";
 
 let a: Org;

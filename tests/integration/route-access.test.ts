@@ -2,27 +2,27 @@
 import { randomUUID } from "node:crypto";
 import { beforeAll, describe, expect, it } from "vitest";
 import routeConfig from "~/routes";
-import { db, schema } from "~/db.server";
-import { roles, type Role } from "~/roles";
+import { db, schema } from "~/infra/db.server";
+import { roles, type Role } from "~/lib/roles";
 import { createOrg, makeRequest, outcome, type Org } from "./fixtures";
 
-import * as account from "~/routes/account";
-import * as apiAuth from "~/routes/api.auth";
-import * as apiHealth from "~/routes/api.health";
-import * as apiMe from "~/routes/api.v1.me";
+import * as account from "~/routes/account/account";
+import * as apiAuth from "~/routes/api/auth";
+import * as apiHealth from "~/routes/api/health";
+import * as apiMe from "~/routes/api/v1/me";
 import * as appLayout from "~/routes/app-layout";
-import * as authLayout from "~/routes/auth-layout";
-import * as checkEmail from "~/routes/check-email";
-import * as forgotPassword from "~/routes/forgot-password";
-import * as home from "~/routes/home";
-import * as invite from "~/routes/invite";
-import * as members from "~/routes/members";
+import * as authLayout from "~/routes/auth/layout";
+import * as checkEmail from "~/routes/auth/check-email";
+import * as forgotPassword from "~/routes/auth/forgot-password";
+import * as home from "~/routes/overview";
+import * as invite from "~/routes/auth/invite";
+import * as members from "~/routes/members/members";
 import * as notFound from "~/routes/not-found";
-import * as resetPassword from "~/routes/reset-password";
-import * as signIn from "~/routes/sign-in";
-import * as signOut from "~/routes/sign-out";
-import * as signUp from "~/routes/sign-up";
-import * as verified from "~/routes/verified";
+import * as resetPassword from "~/routes/auth/reset-password";
+import * as signIn from "~/routes/auth/sign-in";
+import * as signOut from "~/routes/auth/sign-out";
+import * as signUp from "~/routes/auth/sign-up";
+import * as verified from "~/routes/auth/verified";
 import * as welcome from "~/routes/welcome";
 
 type Actor = "anonymous" | Role;
@@ -38,64 +38,64 @@ let org: Org;
 let invitationId = "";
 
 const modules: Record<string, Record<string, unknown>> = {
-  "routes/account.tsx": account,
-  "routes/api.auth.ts": apiAuth,
-  "routes/api.health.ts": apiHealth,
-  "routes/api.v1.me.ts": apiMe,
+  "routes/account/account.tsx": account,
+  "routes/api/auth.ts": apiAuth,
+  "routes/api/health.ts": apiHealth,
+  "routes/api/v1/me.ts": apiMe,
   "routes/app-layout.tsx": appLayout,
-  "routes/auth-layout.tsx": authLayout,
-  "routes/check-email.tsx": checkEmail,
-  "routes/forgot-password.tsx": forgotPassword,
-  "routes/home.tsx": home,
-  "routes/invite.tsx": invite,
-  "routes/members.tsx": members,
+  "routes/auth/layout.tsx": authLayout,
+  "routes/auth/check-email.tsx": checkEmail,
+  "routes/auth/forgot-password.tsx": forgotPassword,
+  "routes/overview.tsx": home,
+  "routes/auth/invite.tsx": invite,
+  "routes/members/members.tsx": members,
   "routes/not-found.tsx": notFound,
-  "routes/reset-password.tsx": resetPassword,
-  "routes/sign-in.tsx": signIn,
-  "routes/sign-out.ts": signOut,
-  "routes/sign-up.tsx": signUp,
-  "routes/verified.tsx": verified,
+  "routes/auth/reset-password.tsx": resetPassword,
+  "routes/auth/sign-in.tsx": signIn,
+  "routes/auth/sign-out.ts": signOut,
+  "routes/auth/sign-up.tsx": signUp,
+  "routes/auth/verified.tsx": verified,
   "routes/welcome.tsx": welcome,
 };
 
 const cases: Case[] = [
-  { file: "routes/home.tsx", method: "loader", path: () => "/", expect: (a) => staff(a, "ok") },
-  { file: "routes/account.tsx", method: "loader", path: () => "/account", expect: (a) => staff(a, "ok") },
-  { file: "routes/account.tsx", method: "action", path: () => "/account", form: {}, expect: (a) => staff(a, "bad-request") },
-  { file: "routes/members.tsx", method: "loader", path: () => "/members", expect: (a) => ownerOnly(a, "ok") },
+  { file: "routes/overview.tsx", method: "loader", path: () => "/", expect: (a) => staff(a, "ok") },
+  { file: "routes/account/account.tsx", method: "loader", path: () => "/account", expect: (a) => staff(a, "ok") },
+  { file: "routes/account/account.tsx", method: "action", path: () => "/account", form: {}, expect: (a) => staff(a, "bad-request") },
+  { file: "routes/members/members.tsx", method: "loader", path: () => "/members", expect: (a) => ownerOnly(a, "ok") },
   // An empty post passes the guard only for owners, who then get the validation error.
-  { file: "routes/members.tsx", method: "action", path: () => "/members", form: {}, expect: (a) => ownerOnly(a, "bad-request") },
+  { file: "routes/members/members.tsx", method: "action", path: () => "/members", form: {}, expect: (a) => ownerOnly(a, "bad-request") },
   { file: "routes/welcome.tsx", method: "loader", path: () => "/welcome", expect: (a) => staff(a, "home") },
   { file: "routes/welcome.tsx", method: "action", path: () => "/welcome", form: { name: "Another consultancy" }, expect: (a) => staff(a, "conflict") },
-  { file: "routes/api.v1.me.ts", method: "loader", path: () => "/api/v1/me", expect: (a) => staff(a, "ok", "unauthorized") },
-  { file: "routes/api.health.ts", method: "loader", path: () => "/api/health", expect: () => "ok" },
-  { file: "routes/api.auth.ts", method: "loader", path: () => "/api/auth/get-session", expect: () => "ok" },
-  { file: "routes/api.auth.ts", method: "loader", path: () => "/api/auth/organization/list-members", expect: () => "not-found" },
-  { file: "routes/api.auth.ts", method: "action", path: () => "/api/auth/organization/update-member-role", form: {}, expect: () => "not-found" },
-  { file: "routes/sign-in.tsx", method: "loader", path: () => "/sign-in", expect: visitorOnly },
-  { file: "routes/sign-up.tsx", method: "loader", path: () => "/sign-up", expect: visitorOnly },
-  { file: "routes/sign-in.tsx", method: "action", path: () => "/sign-in", form: { email: "not-an-address" }, expect: () => "bad-request" },
-  { file: "routes/sign-up.tsx", method: "action", path: () => "/sign-up", form: { email: "x" }, expect: () => "bad-request" },
-  { file: "routes/forgot-password.tsx", method: "action", path: () => "/forgot-password", form: { email: "x" }, expect: () => "bad-request" },
-  { file: "routes/reset-password.tsx", method: "loader", path: () => "/reset-password?token=abc", expect: () => "ok" },
-  { file: "routes/reset-password.tsx", method: "loader", path: () => "/reset-password", expect: () => "bad-request" },
-  { file: "routes/reset-password.tsx", method: "action", path: () => "/reset-password", form: { token: "abc" }, expect: () => "bad-request" },
-  { file: "routes/verified.tsx", method: "loader", path: () => "/verified", expect: () => "ok" },
-  { file: "routes/verified.tsx", method: "loader", path: () => "/verified?error=INVALID_TOKEN", expect: () => "bad-request" },
-  { file: "routes/invite.tsx", method: "loader", path: () => `/invite/${invitationId}`, params: () => ({ invitationId }), expect: () => "ok" },
-  { file: "routes/invite.tsx", method: "loader", path: () => "/invite/nope", params: () => ({ invitationId: "nope" }), expect: () => "not-found" },
+  { file: "routes/api/v1/me.ts", method: "loader", path: () => "/api/v1/me", expect: (a) => staff(a, "ok", "unauthorized") },
+  { file: "routes/api/health.ts", method: "loader", path: () => "/api/health", expect: () => "ok" },
+  { file: "routes/api/auth.ts", method: "loader", path: () => "/api/auth/get-session", expect: () => "ok" },
+  { file: "routes/api/auth.ts", method: "loader", path: () => "/api/auth/organization/list-members", expect: () => "not-found" },
+  { file: "routes/api/auth.ts", method: "action", path: () => "/api/auth/organization/update-member-role", form: {}, expect: () => "not-found" },
+  { file: "routes/auth/sign-in.tsx", method: "loader", path: () => "/sign-in", expect: visitorOnly },
+  { file: "routes/auth/sign-up.tsx", method: "loader", path: () => "/sign-up", expect: visitorOnly },
+  { file: "routes/auth/sign-in.tsx", method: "action", path: () => "/sign-in", form: { email: "not-an-address" }, expect: () => "bad-request" },
+  { file: "routes/auth/sign-up.tsx", method: "action", path: () => "/sign-up", form: { email: "x" }, expect: () => "bad-request" },
+  { file: "routes/auth/forgot-password.tsx", method: "action", path: () => "/forgot-password", form: { email: "x" }, expect: () => "bad-request" },
+  { file: "routes/auth/reset-password.tsx", method: "loader", path: () => "/reset-password?token=abc", expect: () => "ok" },
+  { file: "routes/auth/reset-password.tsx", method: "loader", path: () => "/reset-password", expect: () => "bad-request" },
+  { file: "routes/auth/reset-password.tsx", method: "action", path: () => "/reset-password", form: { token: "abc" }, expect: () => "bad-request" },
+  { file: "routes/auth/verified.tsx", method: "loader", path: () => "/verified", expect: () => "ok" },
+  { file: "routes/auth/verified.tsx", method: "loader", path: () => "/verified?error=INVALID_TOKEN", expect: () => "bad-request" },
+  { file: "routes/auth/invite.tsx", method: "loader", path: () => `/invite/${invitationId}`, params: () => ({ invitationId }), expect: () => "ok" },
+  { file: "routes/auth/invite.tsx", method: "loader", path: () => "/invite/nope", params: () => ({ invitationId: "nope" }), expect: () => "not-found" },
   // Signed-in members are not the invitee: refused; a visitor's empty form is a validation error.
-  { file: "routes/invite.tsx", method: "action", path: () => `/invite/${invitationId}`, form: {}, params: () => ({ invitationId }), expect: (a) => (a === "anonymous" ? "bad-request" : "forbidden") },
-  { file: "routes/sign-out.ts", method: "loader", path: () => "/sign-out", expect: () => "home" },
+  { file: "routes/auth/invite.tsx", method: "action", path: () => `/invite/${invitationId}`, form: {}, params: () => ({ invitationId }), expect: (a) => (a === "anonymous" ? "bad-request" : "forbidden") },
+  { file: "routes/auth/sign-out.ts", method: "loader", path: () => "/sign-out", expect: () => "home" },
   { file: "routes/not-found.tsx", method: "loader", path: () => "/no-such-page", expect: () => "not-found" },
   { file: "routes/app-layout.tsx", method: "loader", path: () => "/", expect: () => "ok" },
-  { file: "routes/auth-layout.tsx", method: "loader", path: () => "/sign-in", expect: () => "ok" },
+  { file: "routes/auth/layout.tsx", method: "loader", path: () => "/sign-in", expect: () => "ok" },
   // Last: signing out revokes the fixture sessions.
-  { file: "routes/sign-out.ts", method: "action", path: () => "/sign-out", form: {}, expect: () => "signed-out" },
+  { file: "routes/auth/sign-out.ts", method: "action", path: () => "/sign-out", form: {}, expect: () => "signed-out" },
 ];
 
 // Pages with no loader or action of their own (static text).
-const staticPages = ["routes/check-email.tsx"];
+const staticPages = ["routes/auth/check-email.tsx"];
 
 function matches(expected: Expect, got: { status: number; location?: string }) {
   switch (expected) {

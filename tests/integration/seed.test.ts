@@ -3,7 +3,7 @@
 import { execFileSync } from "node:child_process";
 import { eq, sql } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
-import { db, schema } from "~/db.server";
+import { db, schema } from "~/infra/db.server";
 
 const demo = [
   ["owner@demo.isotrope.test", "owner"],

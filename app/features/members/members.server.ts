@@ -1,0 +1,68 @@
+// Members of an organisation: list, count, change role, remove. Every write in one transaction with its audit event.
+import { and, asc, eq, gt, sql } from "drizzle-orm";
+import { db, schema, type Tx } from "~/infra/db.server";
+import { audit, type Actor } from "~/lib/audit.server";
+import { DomainError } from "~/lib/domain-error";
+import type { Role } from "~/lib/roles";
+
+const { member, invitation, user } = schema;
+
+export async function listMembers(organizationId: string) {
+  return db
+    .select({ id: member.id, role: member.role, joinedAt: member.createdAt, userId: user.id, name: user.name, email: user.email })
+    .from(member)
+    .innerJoin(user, eq(user.id, member.userId))
+    .where(eq(member.organizationId, organizationId))
+    .orderBy(asc(user.name));
+}
+
+/** Member and waiting-invitation counts for the overview. */
+export async function teamCounts(organizationId: string) {
+  const [members, pending] = await Promise.all([
+    db.select({ n: sql<number>`count(*)::int` }).from(member).where(eq(member.organizationId, organizationId)),
+    db
+      .select({ n: sql<number>`count(*)::int` })
+      .from(invitation)
+      .where(and(eq(invitation.organizationId, organizationId), eq(invitation.status, "pending"), gt(invitation.expiresAt, new Date()))),
+  ]);
+  return { members: members[0]?.n ?? 0, pending: pending[0]?.n ?? 0 };
+}
+
+async function ownerCount(tx: Tx, organizationId: string) {
+  const [row] = await tx
+    .select({ n: sql<number>`count(*)::int` })
+    .from(member)
+    .where(and(eq(member.organizationId, organizationId), eq(member.role, "owner")));
+  return row?.n ?? 0;
+}
+
+/** Loads a member of the actor's organisation inside the transaction, or fails with 404. */
+async function ownMember(tx: Tx, actor: Actor, memberId: string) {
+  const [row] = await tx.select().from(member).where(and(eq(member.id, memberId), eq(member.organizationId, actor.organizationId))).for("update");
+  if (!row) throw new DomainError("No such member in your organisation.", 404);
+  return row;
+}
+
+export async function changeRole(actor: Actor, memberId: string, role: Role) {
+  await db.transaction(async (tx) => {
+    const target = await ownMember(tx, actor, memberId);
+    if (target.role === role) return;
+    if (target.role === "owner" && (await ownerCount(tx, actor.organizationId)) <= 1) {
+      throw new DomainError("The organisation needs at least one owner. Make someone else owner first.", 409);
+    }
+    await tx.update(member).set({ role }).where(eq(member.id, memberId));
+    await audit(tx, actor, "member.role-changed", "member", memberId, { from: target.role, to: role });
+  });
+}
+
+export async function removeMember(actor: Actor, memberId: string) {
+  await db.transaction(async (tx) => {
+    const target = await ownMember(tx, actor, memberId);
+    if (target.userId === actor.userId) throw new DomainError("You cannot remove yourself.", 409);
+    if (target.role === "owner" && (await ownerCount(tx, actor.organizationId)) <= 1) {
+      throw new DomainError("The organisation needs at least one owner.", 409);
+    }
+    await tx.delete(member).where(eq(member.id, memberId));
+    await audit(tx, actor, "member.removed", "member", memberId, { userId: target.userId, role: target.role });
+  });
+}

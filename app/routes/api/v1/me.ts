@@ -1,0 +1,12 @@
+import { requireApiMember } from "~/features/auth/guard.server";
+import type { Route } from "./+types/me";
+
+export async function loader({ request }: Route.LoaderArgs) {
+  const member = await requireApiMember(request);
+  return Response.json({
+    email: member.user.email,
+    name: member.user.name,
+    role: member.role,
+    organization: { id: member.organizationId, name: member.organizationName },
+  });
+}

@@ -1,0 +1,66 @@
+import { getFormProps, useForm } from "@conform-to/react";
+import { parseWithZod } from "@conform-to/zod/v4";
+import { data, Form, Link, redirect, useNavigation, useSearchParams } from "react-router";
+import { callAuth, cookiesOf, TOO_MANY_ATTEMPTS } from "~/features/auth/call.server";
+import { Button } from "~/components/button";
+import { Field, FormErrors } from "~/components/field";
+import { inputProps } from "~/lib/conform";
+import { safeRedirect, signInSchema } from "~/features/auth/schemas";
+import { getSignedIn } from "~/features/auth/guard.server";
+import type { Route } from "./+types/sign-in";
+
+export const meta: Route.MetaFunction = () => [{ title: "Sign in · Isotrope" }];
+
+export async function loader({ request }: Route.LoaderArgs) {
+  if (await getSignedIn(request)) throw redirect("/");
+  return null;
+}
+
+export async function action({ request }: Route.ActionArgs) {
+  const submission = parseWithZod(await request.formData(), { schema: signInSchema });
+  if (submission.status !== "success") return data(submission.reply(), { status: 400 });
+  const { email, password, redirectTo } = submission.value;
+  const result = await callAuth(request, "/sign-in/email", { email, password, callbackURL: "/verified" });
+  if (result.ok) return redirect(safeRedirect(redirectTo), { headers: cookiesOf(result) });
+  const message =
+    result.status === 429
+      ? TOO_MANY_ATTEMPTS
+      : result.code === "EMAIL_NOT_VERIFIED"
+        ? "Confirm your e-mail address first: we have sent you a new link."
+        : "That e-mail and password do not match an account.";
+  return data(submission.reply({ formErrors: [message], hideFields: ["password"] }), { status: result.status === 429 ? 429 : 400 });
+}
+
+export default function SignIn({ actionData }: Route.ComponentProps) {
+  const [params] = useSearchParams();
+  const navigation = useNavigation();
+  const [form, fields] = useForm({
+    lastResult: actionData,
+    onValidate: ({ formData }) => parseWithZod(formData, { schema: signInSchema }),
+    shouldValidate: "onBlur",
+    shouldRevalidate: "onInput",
+  });
+  return (
+    <>
+      <h1 className="mb-1 text-xl font-semibold">Sign in</h1>
+      <p className="mb-6 text-sm text-ink-600">Welcome back. Use the e-mail your organisation knows you by.</p>
+      <Form method="post" {...getFormProps(form)} className="space-y-4">
+        <FormErrors errors={form.errors} />
+        <input type="hidden" name="redirectTo" value={params.get("redirectTo") ?? ""} />
+        <Field label="E-mail" autoComplete="email" {...inputProps(fields.email, "email")} />
+        <Field label="Password" autoComplete="current-password" {...inputProps(fields.password, "password")} />
+        <Button className="w-full" disabled={navigation.state === "submitting"}>
+          {navigation.state === "submitting" ? "Signing in…" : "Sign in"}
+        </Button>
+      </Form>
+      <div className="mt-6 flex justify-between text-sm">
+        <Link to="/forgot-password" className="text-field-600 underline">
+          Forgot your password?
+        </Link>
+        <Link to="/sign-up" className="text-field-600 underline">
+          Create an account
+        </Link>
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,72 @@
+import { getFormProps, useForm } from "@conform-to/react";
+import { parseWithZod } from "@conform-to/zod/v4";
+import { data, Form, Link, redirect, useNavigation } from "react-router";
+import { callAuth, TOO_MANY_ATTEMPTS } from "~/features/auth/call.server";
+import { Button } from "~/components/button";
+import { Field, FormErrors } from "~/components/field";
+import { inputProps } from "~/lib/conform";
+import { signUpSchema } from "~/features/auth/schemas";
+import { accountExists } from "~/features/auth/accounts.server";
+import { getSignedIn } from "~/features/auth/guard.server";
+import type { Route } from "./+types/sign-up";
+
+export const meta: Route.MetaFunction = () => [{ title: "Create an account · Isotrope" }];
+
+export async function loader({ request }: Route.LoaderArgs) {
+  if (await getSignedIn(request)) throw redirect("/");
+  return null;
+}
+
+const taken = "An account with this e-mail already exists. Sign in, or reset the password.";
+
+export async function action({ request }: Route.ActionArgs) {
+  const submission = parseWithZod(await request.formData(), { schema: signUpSchema });
+  if (submission.status !== "success") return data(submission.reply({ hideFields: ["password", "confirm"] }), { status: 400 });
+  const { name, email, password } = submission.value;
+  if (await accountExists(email)) {
+    return data(
+      submission.reply({ fieldErrors: { email: [taken] }, hideFields: ["password", "confirm"] }),
+      { status: 409 },
+    );
+  }
+  const result = await callAuth(request, "/sign-up/email", { name, email, password, callbackURL: "/verified" });
+  if (result.ok) return redirect(`/check-email?email=${encodeURIComponent(email)}`);
+  if (result.status === 429) {
+    return data(submission.reply({ formErrors: [TOO_MANY_ATTEMPTS] }), { status: 429 });
+  }
+  return data(submission.reply({ formErrors: [result.message ?? "The account could not be created."], hideFields: ["password", "confirm"] }), { status: 400 });
+}
+
+export default function SignUp({ actionData }: Route.ComponentProps) {
+  const navigation = useNavigation();
+  const [form, fields] = useForm({
+    lastResult: actionData,
+    onValidate: ({ formData }) => parseWithZod(formData, { schema: signUpSchema }),
+    shouldValidate: "onBlur",
+    shouldRevalidate: "onInput",
+  });
+  return (
+    <>
+      <h1 className="mb-1 text-xl font-semibold">Create an account</h1>
+      <p className="mb-6 text-sm text-ink-600">
+        For consultancies setting up Isotrope. Joining a colleague's organisation? Use the link in their invitation instead.
+      </p>
+      <Form method="post" {...getFormProps(form)} className="space-y-4">
+        <FormErrors errors={form.errors} />
+        <Field label="Your name" autoComplete="name" {...inputProps(fields.name, "text")} />
+        <Field label="E-mail" autoComplete="email" {...inputProps(fields.email, "email")} />
+        <Field label="Password" autoComplete="new-password" hint="At least 10 characters, letters mixed with digits or symbols." {...inputProps(fields.password, "password")} />
+        <Field label="Repeat the password" autoComplete="new-password" {...inputProps(fields.confirm, "password")} />
+        <Button className="w-full" disabled={navigation.state === "submitting"}>
+          Create account
+        </Button>
+      </Form>
+      <p className="mt-6 text-sm">
+        Have an account?{" "}
+        <Link to="/sign-in" className="text-field-600 underline">
+          Sign in
+        </Link>
+      </p>
+    </>
+  );
+}
