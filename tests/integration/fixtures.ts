@@ -2,6 +2,7 @@
 import { createHmac, randomBytes, randomUUID } from "node:crypto";
 import { auth } from "~/features/auth/auth.server";
 import { db, schema } from "~/infra/db.server";
+import { CLIENT_ADDRESS_HEADER } from "~/infra/client-address.server";
 import { env } from "~/infra/env.server";
 import { roles, type Role } from "~/lib/roles";
 
@@ -54,7 +55,7 @@ export const freshIp = () => `10.77.${(ipCounter >> 8) & 255}.${ipCounter++ & 25
 export function makeRequest(path: string, init: { cookie?: string; form?: Record<string, string>; ip?: string } = {}) {
   const headers = new Headers({ origin: env.APP_URL });
   if (init.cookie) headers.set("cookie", init.cookie);
-  if (init.ip) headers.set("x-forwarded-for", init.ip);
+  if (init.ip) headers.set(CLIENT_ADDRESS_HEADER, init.ip);
   if (init.form) {
     headers.set("content-type", "application/x-www-form-urlencoded");
     return new Request(new URL(path, env.APP_URL), { method: "POST", headers, body: new URLSearchParams(init.form) });

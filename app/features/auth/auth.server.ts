@@ -4,6 +4,7 @@ import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { organization } from "better-auth/plugins";
 import { createAccessControl } from "better-auth/plugins/access";
 import { defaultStatements, ownerAc } from "better-auth/plugins/organization/access";
+import { CLIENT_ADDRESS_HEADER } from "~/infra/client-address.server";
 import { db, schema } from "~/infra/db.server";
 import { env } from "~/infra/env.server";
 import { linkMail, sendMail } from "~/infra/mail.server";
@@ -72,7 +73,7 @@ export const auth = betterAuth({
       "/request-password-reset": { window: 60, max: env.SIGN_IN_LIMIT },
     },
   },
-  advanced: { ipAddress: { ipAddressHeaders: ["x-forwarded-for"] } },
+  advanced: { ipAddress: { ipAddressHeaders: [CLIENT_ADDRESS_HEADER] } },
   plugins: [
     organization({
       ac,

@@ -1,9 +1,10 @@
 // Runs one better-auth endpoint through its HTTP handler, so that rate limits,
 // origin checks and cookies apply exactly as for a browser calling /api/auth.
 import { auth } from "~/features/auth/auth.server";
+import { CLIENT_ADDRESS_HEADER } from "~/infra/client-address.server";
 import { env } from "~/infra/env.server";
 
-const forwarded = ["cookie", "user-agent", "x-forwarded-for", "origin", "referer"];
+const forwarded = ["cookie", "user-agent", CLIENT_ADDRESS_HEADER, "origin", "referer"];
 
 /** What a person is told when better-auth's rate limit answers 429. */
 export const TOO_MANY_ATTEMPTS = "Too many attempts. Wait a minute, then try again.";
