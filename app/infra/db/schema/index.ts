@@ -1,3 +1,9 @@
 // The database schema, one file per feature. drizzle-kit reads this folder (drizzle.config.ts).
 export * from "./auth";
 export * from "./audit";
+export * from "./files";
+export * from "./clients";
+export * from "./sites";
+export * from "./emitters";
+export * from "./visits";
+export * from "./tokens";
