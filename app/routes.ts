@@ -15,6 +15,20 @@ export default [
     route("welcome", "routes/welcome.tsx"),
     route("members", "routes/members/members.tsx"),
     route("account", "routes/account/account.tsx"),
+    ...prefix("clients", [
+      index("routes/clients/list.tsx"),
+      route("new", "routes/clients/new.tsx"),
+      route(":clientId", "routes/clients/client.tsx"),
+    ]),
+    ...prefix("sites", [
+      index("routes/sites/list.tsx"),
+      route("new", "routes/sites/new.tsx"),
+      route(":siteId", "routes/sites/site.tsx", [
+        route("edit", "routes/sites/edit.tsx"),
+        route("history", "routes/sites/history.tsx"),
+      ]),
+    ]),
+    route("history", "routes/history/organization.tsx"),
   ]),
   route("sign-out", "routes/auth/sign-out.ts"),
   ...prefix("api", [

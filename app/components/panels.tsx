@@ -41,11 +41,14 @@ export function FlashMessage({ flash }: { flash: Flash | null }) {
   );
 }
 
-export function PageHeader({ title, children }: { title: string; children?: ReactNode }) {
+export function PageHeader({ title, children, actions }: { title: string; children?: ReactNode; actions?: ReactNode }) {
   return (
-    <header className="mb-6">
-      <h1 className="text-2xl font-semibold tracking-tight text-ink-900">{title}</h1>
-      {children ? <div className="mt-1 text-sm text-ink-600">{children}</div> : null}
+    <header className="mb-6 flex flex-wrap items-end justify-between gap-3">
+      <div className="min-w-0">
+        <h1 className="text-2xl font-semibold tracking-tight break-words text-ink-900">{title}</h1>
+        {children ? <div className="mt-1 text-sm text-ink-600">{children}</div> : null}
+      </div>
+      {actions ? <div className="flex gap-2">{actions}</div> : null}
     </header>
   );
 }

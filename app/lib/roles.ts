@@ -24,9 +24,21 @@ export function isRole(value: unknown): value is Role {
   return typeof value === "string" && (roles as readonly string[]).includes(value);
 }
 
+/** The consultancy's own people: they read the inventory (billing read-only). */
+export const staffRoles = ["owner", "engineer", "reviewer", "billing"] as const satisfies readonly Role[];
+/** Who records and edits clients, sites, emitters, visits and readings. */
+export const inventoryEditors = ["owner", "engineer", "reviewer"] as const satisfies readonly Role[];
+
+export function canEditInventory(role: Role) {
+  return (inventoryEditors as readonly Role[]).includes(role);
+}
+
 /** Sections of the portal and the roles that may open each. */
 export const sections = {
   overview: { path: "/", label: "Overview", roles: roles },
+  sites: { path: "/sites", label: "Sites", roles: staffRoles },
+  clients: { path: "/clients", label: "Clients", roles: staffRoles },
+  history: { path: "/history", label: "History", roles: ["owner"] },
   members: { path: "/members", label: "Members", roles: ["owner"] },
   account: { path: "/account", label: "Account", roles: roles },
 } as const satisfies Record<string, { path: string; label: string; roles: readonly Role[] }>;

@@ -3,27 +3,13 @@ import { randomUUID } from "node:crypto";
 import { beforeAll, describe, expect, it } from "vitest";
 import routeConfig from "~/routes";
 import { db, schema } from "~/infra/db.server";
-import { roles, type Role } from "~/lib/roles";
+import { inventoryEditors, roles, staffRoles, type Role } from "~/lib/roles";
 import { createOrg, makeRequest, outcome, type Org } from "./fixtures";
 
-import * as account from "~/routes/account/account";
-import * as apiAuth from "~/routes/api/auth";
-import * as apiHealth from "~/routes/api/health";
-import * as apiMe from "~/routes/api/v1/me";
-import * as appLayout from "~/routes/app-layout";
-import * as authLayout from "~/routes/auth/layout";
-import * as checkEmail from "~/routes/auth/check-email";
-import * as forgotPassword from "~/routes/auth/forgot-password";
-import * as home from "~/routes/overview";
-import * as invite from "~/routes/auth/invite";
-import * as members from "~/routes/members/members";
-import * as notFound from "~/routes/not-found";
-import * as resetPassword from "~/routes/auth/reset-password";
-import * as signIn from "~/routes/auth/sign-in";
-import * as signOut from "~/routes/auth/sign-out";
-import * as signUp from "~/routes/auth/sign-up";
-import * as verified from "~/routes/auth/verified";
-import * as welcome from "~/routes/welcome";
+// Every route module under app/routes, keyed as app/routes.ts names them ("routes/…").
+const modules: Record<string, Record<string, unknown>> = Object.fromEntries(
+  Object.entries(import.meta.glob("/app/routes/**/*.{ts,tsx}", { eager: true })).map(([path, mod]) => [path.replace(/^\/app\//, ""), mod as Record<string, unknown>]),
+);
 
 type Actor = "anonymous" | Role;
 type Expect = "ok" | "sign-in" | "forbidden" | "home" | "unauthorized" | "not-found" | "signed-out" | "bad-request" | "conflict";
@@ -33,30 +19,14 @@ type Case = { file: string; method: "loader" | "action"; path: () => string; for
 const staff = (actor: Actor, ok: Expect, anonymous: Expect = "sign-in") => (actor === "anonymous" ? anonymous : ok);
 const ownerOnly = (actor: Actor, ok: Expect) => (actor === "anonymous" ? "sign-in" : actor === "owner" ? ok : "forbidden");
 const visitorOnly = (actor: Actor) => (actor === "anonymous" ? "ok" : "home");
+/** Allowed for the listed roles, 403 for other members, sign-in for visitors. */
+const rolesIn = (allowed: readonly Role[], ok: Expect) => (actor: Actor): Expect => (actor === "anonymous" ? "sign-in" : allowed.includes(actor) ? ok : "forbidden");
 
 let org: Org;
 let invitationId = "";
+let clientId = "";
+let siteId = "";
 
-const modules: Record<string, Record<string, unknown>> = {
-  "routes/account/account.tsx": account,
-  "routes/api/auth.ts": apiAuth,
-  "routes/api/health.ts": apiHealth,
-  "routes/api/v1/me.ts": apiMe,
-  "routes/app-layout.tsx": appLayout,
-  "routes/auth/layout.tsx": authLayout,
-  "routes/auth/check-email.tsx": checkEmail,
-  "routes/auth/forgot-password.tsx": forgotPassword,
-  "routes/overview.tsx": home,
-  "routes/auth/invite.tsx": invite,
-  "routes/members/members.tsx": members,
-  "routes/not-found.tsx": notFound,
-  "routes/auth/reset-password.tsx": resetPassword,
-  "routes/auth/sign-in.tsx": signIn,
-  "routes/auth/sign-out.ts": signOut,
-  "routes/auth/sign-up.tsx": signUp,
-  "routes/auth/verified.tsx": verified,
-  "routes/welcome.tsx": welcome,
-};
 
 const cases: Case[] = [
   { file: "routes/overview.tsx", method: "loader", path: () => "/", expect: (a) => staff(a, "ok") },
@@ -90,6 +60,19 @@ const cases: Case[] = [
   { file: "routes/not-found.tsx", method: "loader", path: () => "/no-such-page", expect: () => "not-found" },
   { file: "routes/app-layout.tsx", method: "loader", path: () => "/", expect: () => "ok" },
   { file: "routes/auth/layout.tsx", method: "loader", path: () => "/sign-in", expect: () => "ok" },
+  { file: "routes/clients/list.tsx", method: "loader", path: () => "/clients", expect: rolesIn(staffRoles, "ok") },
+  { file: "routes/clients/new.tsx", method: "loader", path: () => "/clients/new", expect: rolesIn(inventoryEditors, "ok") },
+  { file: "routes/clients/new.tsx", method: "action", path: () => "/clients/new", form: {}, expect: rolesIn(inventoryEditors, "bad-request") },
+  { file: "routes/clients/client.tsx", method: "loader", path: () => `/clients/${clientId}`, params: () => ({ clientId }), expect: rolesIn(staffRoles, "ok") },
+  { file: "routes/clients/client.tsx", method: "action", path: () => `/clients/${clientId}`, form: {}, params: () => ({ clientId }), expect: rolesIn(inventoryEditors, "bad-request") },
+  { file: "routes/sites/list.tsx", method: "loader", path: () => "/sites", expect: rolesIn(staffRoles, "ok") },
+  { file: "routes/sites/new.tsx", method: "loader", path: () => "/sites/new", expect: rolesIn(inventoryEditors, "ok") },
+  { file: "routes/sites/new.tsx", method: "action", path: () => "/sites/new", form: {}, expect: rolesIn(inventoryEditors, "bad-request") },
+  { file: "routes/sites/site.tsx", method: "loader", path: () => `/sites/${siteId}`, params: () => ({ siteId }), expect: rolesIn(staffRoles, "ok") },
+  { file: "routes/sites/edit.tsx", method: "loader", path: () => `/sites/${siteId}/edit`, params: () => ({ siteId }), expect: rolesIn(inventoryEditors, "ok") },
+  { file: "routes/sites/edit.tsx", method: "action", path: () => `/sites/${siteId}/edit`, form: {}, params: () => ({ siteId }), expect: rolesIn(inventoryEditors, "bad-request") },
+  { file: "routes/sites/history.tsx", method: "loader", path: () => `/sites/${siteId}/history`, params: () => ({ siteId }), expect: rolesIn(staffRoles, "ok") },
+  { file: "routes/history/organization.tsx", method: "loader", path: () => "/history", expect: rolesIn(["owner"], "ok") },
   // Last: signing out revokes the fixture sessions.
   { file: "routes/auth/sign-out.ts", method: "action", path: () => "/sign-out", form: {}, expect: () => "signed-out" },
 ];
@@ -113,6 +96,10 @@ function matches(expected: Expect, got: { status: number; location?: string }) {
 
 beforeAll(async () => {
   org = await createOrg("access");
+  const [client] = await db.insert(schema.client).values({ organizationId: org.id, name: "Route-table client" }).returning();
+  clientId = client.id;
+  const [site] = await db.insert(schema.site).values({ organizationId: org.id, clientId, name: "Route-table site", kind: "rooftop" }).returning();
+  siteId = site.id;
   invitationId = randomUUID();
   await db.insert(schema.invitation).values({
     id: invitationId, organizationId: org.id, email: `invitee-${invitationId}@fixture.test`, role: "engineer",

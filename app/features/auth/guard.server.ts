@@ -13,7 +13,7 @@ export async function getSignedIn(request: Request) {
   return auth.api.getSession({ headers: request.headers });
 }
 
-/** The user's membership: the session's active organisation, else the oldest. */
+/** The user's membership: the session's active organisation, else the oldest; a client member's bound client. */
 export async function findMembership(userId: string, activeOrganizationId?: string | null) {
   const rows = await db
     .select({
@@ -21,9 +21,11 @@ export async function findMembership(userId: string, activeOrganizationId?: stri
       role: schema.member.role,
       organizationId: schema.organization.id,
       organizationName: schema.organization.name,
+      clientId: schema.clientMember.clientId,
     })
     .from(schema.member)
     .innerJoin(schema.organization, eq(schema.organization.id, schema.member.organizationId))
+    .leftJoin(schema.clientMember, eq(schema.clientMember.memberId, schema.member.id))
     .where(eq(schema.member.userId, userId))
     .orderBy(asc(schema.member.createdAt));
   const row = rows.find((r) => r.organizationId === activeOrganizationId) ?? rows[0];

@@ -28,3 +28,6 @@ export type ClientInput = z.output<typeof clientCreateSchema>;
 
 export const clientPatchSchema = z.strictObject(fields).partial().extend({ version: numberIn("the version you read", { min: 1, integer: true }) });
 export type ClientPatch = z.output<typeof clientPatchSchema>;
+
+/** The page form: create, and edit with the version it read. */
+export const clientFormSchema = clientCreateSchema.extend({ version: numberIn("the version you read", { min: 1, integer: true }).optional() });

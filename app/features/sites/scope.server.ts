@@ -19,3 +19,13 @@ export function siteScope(scope: Scope): SQL {
 export function clientScope(scope: Scope): SQL {
   return and(eq(schema.client.organizationId, scope.organizationId), clientCondition(scope, schema.client.id))!;
 }
+
+/** The scope a signed-in member works in. */
+export function scopeOf(member: { organizationId: string; role: Role; clientId: string | null }): Scope {
+  return { organizationId: member.organizationId, role: member.role, clientId: member.clientId };
+}
+
+/** The scope plus who acts: what every inventory command takes. */
+export function actorOf(member: { organizationId: string; role: Role; clientId: string | null; user: { id: string } }) {
+  return { ...scopeOf(member), userId: member.user.id };
+}

@@ -1,0 +1,134 @@
+// A server-paged table on TanStack Table: sorting and paging live in the URL, so the loader
+// does the work, links can be shared, and Back restores the view.
+import { flexRender, getCoreRowModel, useReactTable, type ColumnDef } from "@tanstack/react-table";
+import type { ReactNode } from "react";
+import { Link, useNavigate, useSearchParams } from "react-router";
+import { PAGE_SIZES } from "~/lib/paging";
+
+declare module "@tanstack/react-table" {
+  interface ColumnMeta<TData, TValue> {
+    /** The URL sort key of this column; absent when it cannot be sorted. */
+    sortKey?: string;
+    align?: "right";
+  }
+}
+
+type Props<Row> = {
+  caption: string;
+  columns: ColumnDef<Row, any>[];
+  rows: Row[];
+  total: number;
+  page: number;
+  pageSize: number;
+  sort: string;
+  dir: "asc" | "desc";
+  empty: ReactNode;
+  getRowId?: (row: Row) => string;
+};
+
+function withParams(params: URLSearchParams, changes: Record<string, string | null>) {
+  const next = new URLSearchParams(params);
+  for (const [k, v] of Object.entries(changes)) {
+    if (v === null) next.delete(k);
+    else next.set(k, v);
+  }
+  return `?${next.toString()}`;
+}
+
+export function DataTable<Row>({ caption, columns, rows, total, page, pageSize, sort, dir, empty, getRowId }: Props<Row>) {
+  const [params] = useSearchParams();
+  const navigate = useNavigate();
+  const table = useReactTable({ data: rows, columns, getCoreRowModel: getCoreRowModel(), manualPagination: true, manualSorting: true, getRowId });
+  const pages = Math.max(1, Math.ceil(total / pageSize));
+  const from = total === 0 ? 0 : (page - 1) * pageSize + 1;
+  const to = Math.min(total, page * pageSize);
+  return (
+    <div>
+      <div className="relative overflow-x-auto rounded-card border border-ink-200 bg-white">
+        <table className="min-w-full divide-y divide-ink-200 text-sm">
+          <caption className="sr-only">{caption}</caption>
+          <thead className="bg-ink-50">
+            {table.getHeaderGroups().map((group) => (
+              <tr key={group.id}>
+                {group.headers.map((header) => {
+                  const key = header.column.columnDef.meta?.sortKey;
+                  const active = key === sort;
+                  const label = header.isPlaceholder ? null : flexRender(header.column.columnDef.header, header.getContext());
+                  const right = header.column.columnDef.meta?.align === "right";
+                  return (
+                    <th
+                      key={header.id}
+                      scope="col"
+                      aria-sort={active ? (dir === "asc" ? "ascending" : "descending") : undefined}
+                      className={`px-3 py-2 font-medium text-ink-600 ${right ? "text-right" : "text-left"}`}
+                    >
+                      {key ? (
+                        <Link
+                          to={withParams(params, { sort: key, dir: active && dir === "asc" ? "desc" : "asc", page: null })}
+                          className="inline-flex items-center gap-1 hover:text-ink-900"
+                        >
+                          {label}
+                          <span aria-hidden="true" className={active ? "text-ink-900" : "text-ink-200"}>
+                            {active && dir === "desc" ? "▾" : "▴"}
+                          </span>
+                        </Link>
+                      ) : (
+                        label
+                      )}
+                    </th>
+                  );
+                })}
+              </tr>
+            ))}
+          </thead>
+          <tbody className="divide-y divide-ink-100">
+            {table.getRowModel().rows.map((row) => (
+              <tr key={row.id} className="hover:bg-ink-50/60">
+                {row.getVisibleCells().map((cell) => (
+                  <td key={cell.id} className={`px-3 py-2 align-middle text-ink-800 ${cell.column.columnDef.meta?.align === "right" ? "text-right tabular-nums" : ""}`}>
+                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                  </td>
+                ))}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+        {rows.length === 0 ? <div className="px-6 py-10 text-center text-sm text-ink-600">{empty}</div> : null}
+      </div>
+      <nav aria-label="Pages" className="mt-3 flex flex-wrap items-center justify-between gap-3 text-sm text-ink-600">
+        <span className="tabular-nums">{total === 0 ? "Nothing to show" : `${from}–${to} of ${total}`}</span>
+        <span className="flex items-center gap-2">
+          <label className="flex items-center gap-1">
+            <span>Rows</span>
+            <select
+              className="rounded-md border border-ink-200 bg-white px-1.5 py-1"
+              value={pageSize}
+              onChange={(e) => {
+                navigate(withParams(params, { pageSize: e.target.value, page: null }));
+              }}
+            >
+              {PAGE_SIZES.map((n) => (
+                <option key={n} value={n}>
+                  {n}
+                </option>
+              ))}
+            </select>
+          </label>
+          {page > 1 ? (
+            <Link className="rounded-md px-2 py-1 ring-1 ring-ink-200 hover:bg-ink-50" to={withParams(params, { page: String(page - 1) })}>
+              Previous
+            </Link>
+          ) : null}
+          <span className="tabular-nums">
+            Page {Math.min(page, pages)} of {pages}
+          </span>
+          {page < pages ? (
+            <Link className="rounded-md px-2 py-1 ring-1 ring-ink-200 hover:bg-ink-50" to={withParams(params, { page: String(page + 1) })}>
+              Next
+            </Link>
+          ) : null}
+        </span>
+      </nav>
+    </div>
+  );
+}

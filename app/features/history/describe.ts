@@ -1,0 +1,118 @@
+// History in words: what an audit event's action means, and which fields changed from what to what.
+const entityNames: Record<string, string> = {
+  site: "site",
+  client: "client",
+  surface: "surface",
+  obstruction: "obstruction",
+  "access-point": "access point",
+  backdrop: "roof drawing",
+  emitter: "emitter",
+  pattern: "antenna pattern",
+  visit: "visit",
+  photo: "photo",
+  reading: "reading",
+  token: "API token",
+};
+
+const verbs: Record<string, string> = { created: "added", updated: "changed", deleted: "removed", imported: "imported", replaced: "replaced" };
+
+/** "changed emitter A1" from "emitter.updated" and the record's label. */
+export function describeAction(action: string, entity: string, label?: string | null) {
+  const verb = verbs[action.split(".").pop() ?? ""] ?? action.split(".").pop() ?? action;
+  const noun = entityNames[entity] ?? entity;
+  return label ? `${verb} ${noun} ${label}` : `${verb} ${noun}`;
+}
+
+/** The label people know a record by, from its fields. */
+export function recordLabel(fields: Record<string, unknown> | null | undefined) {
+  if (!fields) return null;
+  for (const key of ["label", "name", "visitedOn", "fileName"]) {
+    const value = fields[key];
+    if (typeof value === "string" && value) return value;
+  }
+  return null;
+}
+
+const fieldLabels: Record<string, string> = {
+  name: "Name",
+  kind: "Kind",
+  address: "Address",
+  city: "City",
+  clientId: "Client",
+  latitude: "Latitude",
+  longitude: "Longitude",
+  datumNote: "Height datum",
+  accessNotes: "Access notes",
+  billingAddress: "Billing address",
+  notes: "Notes",
+  contacts: "Contacts",
+  label: "Label",
+  operator: "Operator",
+  band: "Band / service",
+  frequencyMHz: "Frequency (MHz)",
+  powerPerCarrierW: "Power per carrier (W)",
+  powerUnit: "Power entered in",
+  carriers: "Carriers",
+  lossDb: "Loss (dB)",
+  gainDbi: "Gain (dBi)",
+  gainUnit: "Gain entered in",
+  patternId: "Pattern",
+  pattern: "Parametric pattern",
+  hBeamwidthDeg: "Horizontal beamwidth (°)",
+  vBeamwidthDeg: "Vertical beamwidth (°)",
+  azimuthDeg: "Azimuth (°)",
+  mechanicalTiltDeg: "Mechanical downtilt (°)",
+  electricalTiltDeg: "Electrical downtilt (°)",
+  x: "x (m)",
+  y: "y (m)",
+  z: "z (m)",
+  model: "Model",
+  apertureM: "Aperture height (m)",
+  dishDiameterM: "Dish diameter (m)",
+  dutyFactor: "Duty factor",
+  actualMaxFactor: "Actual-maximum factor F_PR",
+  tddFactor: "TDD factor",
+  active: "Active",
+  polygon: "Outline",
+  line: "Segment",
+  elevationM: "Elevation (m)",
+  bottomM: "Bottom (m)",
+  topM: "Top (m)",
+  access: "Who may be there",
+  baseM: "Base (m)",
+  heightM: "Height (m)",
+  visitedOn: "Date",
+  people: "People",
+  conditions: "Conditions",
+  instruments: "Instruments",
+  value: "Value",
+  unit: "Unit",
+  caption: "Caption",
+};
+
+export function fieldLabel(key: string) {
+  return fieldLabels[key] ?? key.replace(/([a-z])([A-Z])/g, "$1 $2").replace(/^./, (c) => c.toUpperCase());
+}
+
+/** A value as a short readable text: numbers as they are, lists and outlines summarised. */
+export function showValue(value: unknown): string {
+  if (value === null || value === undefined || value === "") return "—";
+  if (typeof value === "boolean") return value ? "yes" : "no";
+  if (typeof value === "number") return String(value);
+  if (typeof value === "string") return value;
+  if (Array.isArray(value)) {
+    if (value.every((p) => Array.isArray(p) && p.length === 2 && p.every((n) => typeof n === "number"))) {
+      return value.map((p) => `(${p[0]}, ${p[1]})`).join(" ");
+    }
+    return value.map((v) => (v && typeof v === "object" ? recordLabel(v as Record<string, unknown>) ?? JSON.stringify(v) : String(v))).join(", ");
+  }
+  return JSON.stringify(value);
+}
+
+/** Field-by-field rows of a change: every field in before or after whose value differs. */
+export function changeRows(before: Record<string, unknown> | null, after: Record<string, unknown> | null) {
+  const keys = [...new Set([...Object.keys(before ?? {}), ...Object.keys(after ?? {})])].filter((k) => k !== "id" && k !== "siteId");
+  return keys
+    .filter((k) => JSON.stringify(before?.[k] ?? null) !== JSON.stringify(after?.[k] ?? null))
+    .map((k) => ({ field: fieldLabel(k), before: before ? showValue(before[k]) : "", after: after ? showValue(after[k]) : "" }));
+}

@@ -1,0 +1,28 @@
+import { requireMember } from "~/features/auth/guard.server";
+import { HistoryList } from "~/features/history/history-list";
+import { siteHistory } from "~/features/history/history.server";
+import { scopeOf } from "~/features/sites/scope.server";
+import { findSite } from "~/features/sites/sites.server";
+import { found } from "~/lib/responses.server";
+import { staffRoles } from "~/lib/roles";
+import type { Route } from "./+types/history";
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const member = await requireMember(request, { roles: staffRoles });
+  const site = found(await findSite(scopeOf(member), params.siteId), "No such site in your organisation.");
+  return { events: await siteHistory(member.organizationId, site.id) };
+}
+
+export default function SiteHistory({ loaderData }: Route.ComponentProps) {
+  return (
+    <section aria-labelledby="history-title">
+      <h2 id="history-title" className="mb-1 text-lg font-semibold">
+        History
+      </h2>
+      <p className="mb-4 text-sm text-ink-600">Every change to this site's details, layout, emitters, visits and readings, newest first.</p>
+      <HistoryList events={loaderData.events} empty="No changes recorded yet." />
+    </section>
+  );
+}
+
+export { RouteError as ErrorBoundary } from "~/components/route-error";
