@@ -35,6 +35,12 @@ export default [
     route("auth/*", "routes/api/auth.ts"),
     route("health", "routes/api/health.ts"),
     route("v1/me", "routes/api/v1/me.ts"),
+    route("v1/tokens", "routes/api/v1/tokens.ts"),
+    route("v1/tokens/:tokenId", "routes/api/v1/token.ts"),
+    route("v1/clients", "routes/api/v1/clients.ts"),
+    route("v1/sites", "routes/api/v1/sites.ts"),
+    route("v1/sites/:siteId", "routes/api/v1/site.ts"),
+    route("v1/sites/:siteId/history", "routes/api/v1/site-history.ts"),
   ]),
   route("*", "routes/not-found.tsx"),
 ] satisfies RouteConfig;

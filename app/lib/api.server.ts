@@ -5,8 +5,13 @@ import { DomainError } from "./domain-error";
 
 export type FieldErrors = Record<string, string>;
 
-export function apiError(status: number, message: string, fields?: FieldErrors, extra?: Record<string, unknown>) {
-  return Response.json({ error: { message, ...(fields ? { fields } : {}) }, ...extra }, { status });
+export function apiError(status: number, message: string, fields?: FieldErrors, extra?: Record<string, unknown>, headers?: Record<string, string>) {
+  return Response.json({ error: { message, ...(fields ? { fields } : {}) }, ...extra }, { status, headers });
+}
+
+/** 405 with the methods the route answers. */
+export function methodNotAllowed(allow: string) {
+  return apiError(405, `This address answers ${allow}.`, undefined, undefined, { allow });
 }
 
 /** "emitters[2].frequencyMHz" from a Zod issue path. */

@@ -52,10 +52,15 @@ let ipCounter = 0;
 /** A distinct client address per request builder, so rate limits of different tests don't mix. */
 export const freshIp = () => `10.77.${(ipCounter >> 8) & 255}.${ipCounter++ & 255}`;
 
-export function makeRequest(path: string, init: { cookie?: string; form?: Record<string, string>; ip?: string } = {}) {
+export function makeRequest(path: string, init: { cookie?: string; form?: Record<string, string>; json?: unknown; method?: string; ip?: string } = {}) {
   const headers = new Headers({ origin: env.APP_URL });
   if (init.cookie) headers.set("cookie", init.cookie);
   if (init.ip) headers.set(CLIENT_ADDRESS_HEADER, init.ip);
+  if (init.json !== undefined) {
+    headers.set("content-type", "application/json");
+    return new Request(new URL(path, env.APP_URL), { method: init.method ?? "POST", headers, body: JSON.stringify(init.json) });
+  }
+  if (init.method && init.method !== "GET") return new Request(new URL(path, env.APP_URL), { method: init.method, headers });
   if (init.form) {
     headers.set("content-type", "application/x-www-form-urlencoded");
     return new Request(new URL(path, env.APP_URL), { method: "POST", headers, body: new URLSearchParams(init.form) });

@@ -14,11 +14,23 @@ const modules: Record<string, Record<string, unknown>> = Object.fromEntries(
 type Actor = "anonymous" | Role;
 type Expect = "ok" | "sign-in" | "forbidden" | "home" | "unauthorized" | "not-found" | "signed-out" | "bad-request" | "conflict";
 type Handler = (args: { request: Request; params: Record<string, string>; context: unknown }) => unknown;
-type Case = { file: string; method: "loader" | "action"; path: () => string; form?: Record<string, string>; params?: () => Record<string, string>; expect: (actor: Actor) => Expect };
+type Case = {
+  file: string;
+  method: "loader" | "action";
+  path: () => string;
+  form?: Record<string, string>;
+  /** A JSON body (API routes); `method2` the HTTP method when not POST. */
+  json?: unknown;
+  method2?: "PATCH" | "PUT" | "DELETE";
+  params?: () => Record<string, string>;
+  expect: (actor: Actor) => Expect;
+};
 
 const staff = (actor: Actor, ok: Expect, anonymous: Expect = "sign-in") => (actor === "anonymous" ? anonymous : ok);
 const ownerOnly = (actor: Actor, ok: Expect) => (actor === "anonymous" ? "sign-in" : actor === "owner" ? ok : "forbidden");
 const visitorOnly = (actor: Actor) => (actor === "anonymous" ? "ok" : "home");
+/** API routes: allowed for the listed roles, 403 for other members, 401 for visitors. */
+const apiRoles = (allowed: readonly Role[], ok: Expect) => (actor: Actor): Expect => (actor === "anonymous" ? "unauthorized" : allowed.includes(actor) ? ok : "forbidden");
 /** Allowed for the listed roles, 403 for other members, sign-in for visitors. */
 const rolesIn = (allowed: readonly Role[], ok: Expect) => (actor: Actor): Expect => (actor === "anonymous" ? "sign-in" : allowed.includes(actor) ? ok : "forbidden");
 
@@ -72,6 +84,16 @@ const cases: Case[] = [
   { file: "routes/sites/edit.tsx", method: "loader", path: () => `/sites/${siteId}/edit`, params: () => ({ siteId }), expect: rolesIn(inventoryEditors, "ok") },
   { file: "routes/sites/edit.tsx", method: "action", path: () => `/sites/${siteId}/edit`, form: {}, params: () => ({ siteId }), expect: rolesIn(inventoryEditors, "bad-request") },
   { file: "routes/sites/history.tsx", method: "loader", path: () => `/sites/${siteId}/history`, params: () => ({ siteId }), expect: rolesIn(staffRoles, "ok") },
+  { file: "routes/api/v1/sites.ts", method: "loader", path: () => "/api/v1/sites", expect: apiRoles(staffRoles, "ok") },
+  { file: "routes/api/v1/sites.ts", method: "action", path: () => "/api/v1/sites", json: {}, expect: apiRoles(inventoryEditors, "bad-request") },
+  { file: "routes/api/v1/site.ts", method: "loader", path: () => `/api/v1/sites/${siteId}`, params: () => ({ siteId }), expect: apiRoles(staffRoles, "ok") },
+  { file: "routes/api/v1/site.ts", method: "action", path: () => `/api/v1/sites/${siteId}`, method2: "PATCH", json: {}, params: () => ({ siteId }), expect: apiRoles(inventoryEditors, "bad-request") },
+  { file: "routes/api/v1/site-history.ts", method: "loader", path: () => `/api/v1/sites/${siteId}/history`, params: () => ({ siteId }), expect: apiRoles(staffRoles, "ok") },
+  { file: "routes/api/v1/clients.ts", method: "loader", path: () => "/api/v1/clients", expect: apiRoles(staffRoles, "ok") },
+  { file: "routes/api/v1/clients.ts", method: "action", path: () => "/api/v1/clients", json: {}, expect: apiRoles(inventoryEditors, "bad-request") },
+  { file: "routes/api/v1/tokens.ts", method: "loader", path: () => "/api/v1/tokens", expect: apiRoles(roles, "ok") },
+  { file: "routes/api/v1/tokens.ts", method: "action", path: () => "/api/v1/tokens", json: {}, expect: apiRoles(roles, "bad-request") },
+  { file: "routes/api/v1/token.ts", method: "action", path: () => "/api/v1/tokens/nope", method2: "DELETE", params: () => ({ tokenId: "nope" }), expect: apiRoles(roles, "not-found") },
   { file: "routes/history/organization.tsx", method: "loader", path: () => "/history", expect: rolesIn(["owner"], "ok") },
   // Last: signing out revokes the fixture sessions.
   { file: "routes/auth/sign-out.ts", method: "action", path: () => "/sign-out", form: {}, expect: () => "signed-out" },
@@ -124,14 +146,14 @@ describe("route × role", () => {
 
   const actors: Actor[] = ["anonymous", ...roles];
   for (const c of cases) {
-    it(`${c.form ? "POST" : "GET"} ${c.path().replace(/\/invite\/$/, "/invite/:id")} → ${c.file} ${c.method}`, async () => {
+    it(`${c.method2 ?? (c.form || c.json ? "POST" : "GET")} ${c.path().replace(/\/invite\/$/, "/invite/:id")} → ${c.file} ${c.method}`, async () => {
       const handler = modules[c.file][c.method] as Handler | undefined;
       expect(handler, `${c.file} has a ${c.method}`).toBeTypeOf("function");
       const results: Record<string, string> = {};
       const wanted: Record<string, string> = {};
       for (const actor of actors) {
         const cookie = actor === "anonymous" ? undefined : org.people[actor].cookie;
-        const request = makeRequest(c.path(), { cookie, form: c.form });
+        const request = makeRequest(c.path(), { cookie, form: c.form, json: c.json, method: c.method2 });
         const got = await outcome(() => handler!({ request, params: c.params?.() ?? {}, context: {} }));
         const expected = c.expect(actor);
         wanted[actor] = expected;

@@ -3,6 +3,8 @@
 import { asc, eq } from "drizzle-orm";
 import { data, redirect } from "react-router";
 import { auth } from "~/features/auth/auth.server";
+import { resolveToken } from "~/features/auth/tokens.server";
+import { apiError } from "~/lib/api.server";
 import { db, schema } from "~/infra/db.server";
 import { isRole, type Role } from "~/lib/roles";
 
@@ -58,14 +60,21 @@ export async function requireUser(request: Request) {
   return signedIn;
 }
 
-/** API guard: JSON 401 / 403 instead of redirects. */
+/** API guard: a bearer token or a session; JSON 401 / 403 instead of redirects. */
 export async function requireApiMember(request: Request, options: { roles?: readonly Role[] } = {}): Promise<Member> {
-  const signedIn = await getSignedIn(request);
-  if (!signedIn) throw Response.json({ error: "Sign in first." }, { status: 401 });
+  const authorization = request.headers.get("authorization");
+  const signedIn = authorization ? await signedInByToken(authorization) : await getSignedIn(request);
+  if (!signedIn) throw apiError(401, authorization ? "That API token is not valid: it may have been revoked." : "Sign in first, or send an API token (Authorization: Bearer …).");
   const membership = await findMembership(signedIn.user.id, signedIn.session.activeOrganizationId);
-  if (!membership) throw Response.json({ error: "You belong to no organisation." }, { status: 403 });
-  if (options.roles && !options.roles.includes(membership.role)) {
-    throw Response.json({ error: "Your role does not allow this." }, { status: 403 });
-  }
+  if (!membership) throw apiError(403, "You belong to no organisation.");
+  if (options.roles && !options.roles.includes(membership.role)) throw apiError(403, "Your role does not allow this.");
   return { ...membership, user: signedIn.user };
+}
+
+/** A token stands for its member in its organisation, with the member's current role. */
+async function signedInByToken(authorization: string) {
+  const token = await resolveToken(authorization);
+  if (!token) return null;
+  const [user] = await db.select().from(schema.user).where(eq(schema.user.id, token.userId));
+  return user ? { user, session: { activeOrganizationId: token.organizationId } } : null;
 }
