@@ -24,12 +24,14 @@ export default [
       index("routes/sites/list.tsx"),
       route("new", "routes/sites/new.tsx"),
       route(":siteId", "routes/sites/site.tsx", [
+        index("routes/sites/layout.tsx"),
         route("edit", "routes/sites/edit.tsx"),
         route("history", "routes/sites/history.tsx"),
       ]),
     ]),
     route("history", "routes/history/organization.tsx"),
   ]),
+  route("files/:fileId", "routes/files/file.ts"),
   route("sign-out", "routes/auth/sign-out.ts"),
   ...prefix("api", [
     route("auth/*", "routes/api/auth.ts"),

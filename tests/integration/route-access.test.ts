@@ -81,6 +81,8 @@ const cases: Case[] = [
   { file: "routes/sites/new.tsx", method: "loader", path: () => "/sites/new", expect: rolesIn(inventoryEditors, "ok") },
   { file: "routes/sites/new.tsx", method: "action", path: () => "/sites/new", form: {}, expect: rolesIn(inventoryEditors, "bad-request") },
   { file: "routes/sites/site.tsx", method: "loader", path: () => `/sites/${siteId}`, params: () => ({ siteId }), expect: rolesIn(staffRoles, "ok") },
+  { file: "routes/sites/layout.tsx", method: "loader", path: () => `/sites/${siteId}`, params: () => ({ siteId }), expect: rolesIn(staffRoles, "ok") },
+  { file: "routes/files/file.ts", method: "loader", path: () => "/files/nope", params: () => ({ fileId: "nope" }), expect: rolesIn(staffRoles, "not-found") },
   { file: "routes/sites/edit.tsx", method: "loader", path: () => `/sites/${siteId}/edit`, params: () => ({ siteId }), expect: rolesIn(inventoryEditors, "ok") },
   { file: "routes/sites/edit.tsx", method: "action", path: () => `/sites/${siteId}/edit`, form: {}, params: () => ({ siteId }), expect: rolesIn(inventoryEditors, "bad-request") },
   { file: "routes/sites/history.tsx", method: "loader", path: () => `/sites/${siteId}/history`, params: () => ({ siteId }), expect: rolesIn(staffRoles, "ok") },

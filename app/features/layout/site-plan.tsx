@@ -1,0 +1,227 @@
+// The site plan in SVG: walkable areas, facades, obstructions, access points, an optional roof
+// drawing underneath, a metre grid, north arrow and scale bar. Other features draw their own
+// layers on top through `children(frame)` (emitters, readings, exposure) in site metres via
+// frame.toPx. Clicks report site coordinates, so a polygon can be drawn on the plan.
+import { useId, useMemo, useRef, type MouseEvent, type ReactNode } from "react";
+import { boundsOf, makeFrame, scaleBarMetres, type PlanFrame, type XY } from "./plan-frame";
+
+export type PlanSurface = { id: string; name: string; kind: "area" | "facade"; polygon?: XY[] | null; line?: [XY, XY] | null; elevationM?: number | null; bottomM?: number | null; topM?: number | null; access: "public" | "workers" | "none" };
+export type PlanObstruction = { id: string; name: string; polygon: XY[]; heightM: number };
+export type PlanAccessPoint = { id: string; name: string; kind: string; x: number; y: number };
+export type PlanBackdrop = { href: string; widthPx: number; heightPx: number; p1: XY; p2: XY; distanceM: number; originX: number; originY: number; rotationDeg: number; opacity: number };
+
+type Props = {
+  title: string;
+  surfaces: PlanSurface[];
+  obstructions?: PlanObstruction[];
+  accessPoints?: PlanAccessPoint[];
+  backdrop?: PlanBackdrop | null;
+  /** More points the frame must hold (emitters, readings). */
+  extraPoints?: XY[];
+  highlightId?: string | null;
+  /** A polygon being drawn, open at its end. */
+  draft?: XY[];
+  onSiteClick?: (site: XY) => void;
+  onSiteMove?: (site: XY | null) => void;
+  width?: number;
+  children?: (frame: PlanFrame) => ReactNode;
+};
+
+const fills = { public: "url(#plan-public)", workers: "url(#plan-workers)", none: "url(#plan-none)" } as const;
+
+/** Where the backdrop's image pixels land: scale from two points a known distance apart, then rotate about p1 and move p1 to the origin. */
+export function backdropTransform(b: PlanBackdrop, frame: PlanFrame) {
+  const pixelDistance = Math.hypot(b.p2[0] - b.p1[0], b.p2[1] - b.p1[1]) || 1;
+  const metresPerPixel = b.distanceM / pixelDistance;
+  const [ox, oy] = frame.toPx(b.originX, b.originY);
+  const k = metresPerPixel * frame.scale;
+  return `translate(${ox} ${oy}) rotate(${b.rotationDeg}) scale(${k}) translate(${-b.p1[0]} ${-b.p1[1]})`;
+}
+
+export function SitePlan({ title, surfaces, obstructions = [], accessPoints = [], backdrop, extraPoints = [], highlightId, draft, onSiteClick, onSiteMove, width = 960, children }: Props) {
+  const svgRef = useRef<SVGSVGElement>(null);
+  const titleId = useId();
+  const frame = useMemo(() => {
+    const points: XY[] = [...extraPoints];
+    for (const s of surfaces) {
+      if (s.kind === "area" && s.polygon) points.push(...s.polygon);
+      if (s.kind === "facade" && s.line) points.push(...s.line);
+    }
+    for (const o of obstructions) points.push(...o.polygon);
+    for (const a of accessPoints) points.push([a.x, a.y]);
+    if (draft) points.push(...draft);
+    return makeFrame(boundsOf(points), { width });
+  }, [surfaces, obstructions, accessPoints, extraPoints, draft, width]);
+
+  const toSiteFromEvent = (event: MouseEvent<SVGSVGElement>): XY | null => {
+    const svg = svgRef.current;
+    const matrix = svg?.getScreenCTM();
+    if (!svg || !matrix) return null;
+    const point = new DOMPoint(event.clientX, event.clientY).matrixTransform(matrix.inverse());
+    return frame.toSite(point.x, point.y);
+  };
+
+  const { bounds, scale } = frame;
+  const gridStep = scale > 12 ? 1 : scale > 3 ? 5 : 10;
+  const lines: ReactNode[] = [];
+  for (let x = Math.ceil(bounds.minX / gridStep) * gridStep; x <= bounds.maxX; x += gridStep) {
+    const [px] = frame.toPx(x, 0);
+    const major = Math.abs(x % (gridStep * 5)) < 1e-9;
+    lines.push(<line key={`x${x}`} x1={px} x2={px} y1={0} y2={frame.height} className={major ? "stroke-ink-200" : "stroke-ink-100"} />);
+  }
+  for (let y = Math.ceil(bounds.minY / gridStep) * gridStep; y <= bounds.maxY; y += gridStep) {
+    const [, py] = frame.toPx(0, y);
+    const major = Math.abs(y % (gridStep * 5)) < 1e-9;
+    lines.push(<line key={`y${y}`} y1={py} y2={py} x1={0} x2={frame.width} className={major ? "stroke-ink-200" : "stroke-ink-100"} />);
+  }
+  const path = (pts: XY[], close = true) => pts.map((p, i) => `${i ? "L" : "M"}${frame.toPx(...p).map((v) => v.toFixed(2)).join(" ")}`).join("") + (close ? "Z" : "");
+  const [originX, originY] = frame.toPx(0, 0);
+  const bar = scaleBarMetres(frame);
+
+  return (
+    <svg
+      ref={svgRef}
+      viewBox={`0 0 ${frame.width} ${frame.height}`}
+      role="img"
+      aria-labelledby={titleId}
+      className={`block h-auto w-full select-none rounded-card border border-ink-200 bg-white ${onSiteClick ? "cursor-crosshair" : ""}`}
+      onClick={onSiteClick ? (e) => { const p = toSiteFromEvent(e); if (p) onSiteClick(p); } : undefined}
+      onMouseMove={onSiteMove ? (e) => onSiteMove(toSiteFromEvent(e)) : undefined}
+      onMouseLeave={onSiteMove ? () => onSiteMove(null) : undefined}
+    >
+      <title id={titleId}>{title}</title>
+      <defs>
+        <pattern id="plan-public" width="8" height="8" patternUnits="userSpaceOnUse">
+          <rect width="8" height="8" className="fill-ink-50" />
+        </pattern>
+        <pattern id="plan-workers" width="8" height="8" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
+          <rect width="8" height="8" className="fill-ink-50" />
+          <line x1="0" y1="0" x2="0" y2="8" className="stroke-ink-200" strokeWidth="2" />
+        </pattern>
+        <pattern id="plan-none" width="8" height="8" patternUnits="userSpaceOnUse">
+          <rect width="8" height="8" className="fill-ink-100" />
+          <path d="M0 0L8 8M8 0L0 8" className="stroke-ink-200" strokeWidth="1" />
+        </pattern>
+        <pattern id="plan-solid" width="6" height="6" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
+          <rect width="6" height="6" className="fill-ink-200" />
+          <line x1="0" y1="0" x2="0" y2="6" className="stroke-ink-400" strokeWidth="1.5" />
+        </pattern>
+      </defs>
+      {backdrop ? <image href={backdrop.href} width={backdrop.widthPx} height={backdrop.heightPx} opacity={backdrop.opacity} transform={backdropTransform(backdrop, frame)} preserveAspectRatio="none" /> : null}
+      <g strokeWidth="1">{lines}</g>
+      <g aria-hidden="true">
+        <line x1={originX - 6} x2={originX + 6} y1={originY} y2={originY} className="stroke-ink-400" />
+        <line y1={originY - 6} y2={originY + 6} x1={originX} x2={originX} className="stroke-ink-400" />
+      </g>
+      {surfaces.map((s) =>
+        s.kind === "area" && s.polygon && s.polygon.length >= 3 ? (
+          <g key={s.id}>
+            <path d={path(s.polygon)} fill={fills[s.access]} fillOpacity={backdrop ? 0.6 : 1} className={s.id === highlightId ? "stroke-ink-900" : "stroke-ink-600"} strokeWidth={s.id === highlightId ? 2.5 : 1.25} />
+            <AreaLabel frame={frame} surface={s} />
+          </g>
+        ) : s.kind === "facade" && s.line ? (
+          <g key={s.id}>
+            <path d={path(s.line, false)} className={s.id === highlightId ? "stroke-ink-900" : "stroke-ink-800"} strokeWidth={5} strokeLinecap="butt" />
+            <text {...labelAt(frame, s.line[0], s.line[1])} className="fill-ink-800 text-[11px]" textAnchor="middle" dy={-8}>
+              {s.name} (facade)
+            </text>
+          </g>
+        ) : null,
+      )}
+      {obstructions.map((o) =>
+        o.polygon.length >= 3 ? (
+          <g key={o.id}>
+            <path d={path(o.polygon)} fill="url(#plan-solid)" className="stroke-ink-600" strokeWidth={1.25} />
+            <text {...labelAt(frame, ...centroid(o.polygon))} className="fill-ink-900 text-[10px]" textAnchor="middle">
+              {o.name} · {o.heightM} m
+            </text>
+          </g>
+        ) : null,
+      )}
+      {accessPoints.map((a) => {
+        const [px, py] = frame.toPx(a.x, a.y);
+        return (
+          <g key={a.id} transform={`translate(${px} ${py})`}>
+            <rect x={-6} y={-6} width={12} height={12} className="fill-white stroke-ink-900" strokeWidth={1.5} />
+            <text y={4} textAnchor="middle" className="fill-ink-900 text-[9px] font-semibold">
+              {a.kind.slice(0, 1).toUpperCase()}
+            </text>
+            <text x={9} y={4} className="fill-ink-800 text-[10px]">
+              {a.name}
+            </text>
+          </g>
+        );
+      })}
+      {draft && draft.length ? (
+        <g>
+          <path d={path(draft, false)} fill="none" className="stroke-ink-900" strokeWidth={2} strokeDasharray="5 4" />
+          {draft.map((p, i) => {
+            const [px, py] = frame.toPx(...p);
+            return <circle key={i} cx={px} cy={py} r={i === 0 ? 5 : 3.5} className={i === 0 ? "fill-white stroke-ink-900" : "fill-ink-900"} strokeWidth={1.5} />;
+          })}
+        </g>
+      ) : null}
+      {children?.(frame)}
+      <NorthArrow x={frame.width - 28} y={30} />
+      <ScaleBar frame={frame} metres={bar} />
+    </svg>
+  );
+}
+
+function centroid(points: XY[]): XY {
+  const n = points.length || 1;
+  return [points.reduce((s, p) => s + p[0], 0) / n, points.reduce((s, p) => s + p[1], 0) / n];
+}
+
+function labelAt(frame: PlanFrame, a: XY | number, b?: XY | number) {
+  if (Array.isArray(a) && Array.isArray(b)) {
+    const [x, y] = frame.toPx((a[0] + b[0]) / 2, (a[1] + b[1]) / 2);
+    return { x, y };
+  }
+  const [x, y] = frame.toPx(a as number, b as number);
+  return { x, y };
+}
+
+function AreaLabel({ frame, surface }: { frame: PlanFrame; surface: PlanSurface }) {
+  const [cx, cy] = centroid(surface.polygon ?? []);
+  const { x, y } = labelAt(frame, cx, cy);
+  const elevation = surface.elevationM ?? 0;
+  return (
+    <text x={x} y={y} textAnchor="middle" className="pointer-events-none fill-ink-900 text-[11px]">
+      <tspan x={x}>{surface.name}</tspan>
+      <tspan x={x} dy={13} className="fill-ink-600 text-[10px]">
+        {elevation >= 0 ? "+" : "−"}
+        {Math.abs(elevation).toFixed(1)} m
+      </tspan>
+    </text>
+  );
+}
+
+function NorthArrow({ x, y }: { x: number; y: number }) {
+  return (
+    <g transform={`translate(${x} ${y})`} aria-hidden="true">
+      <path d="M0 -16 L7 8 L0 3 L-7 8 Z" className="fill-ink-900" />
+      <text y={22} textAnchor="middle" className="fill-ink-900 text-[11px] font-semibold">
+        N
+      </text>
+    </g>
+  );
+}
+
+function ScaleBar({ frame, metres }: { frame: PlanFrame; metres: number }) {
+  const length = metres * frame.scale;
+  const x = 16;
+  const y = frame.height - 18;
+  return (
+    <g aria-hidden="true">
+      <rect x={x} y={y - 4} width={length / 2} height={4} className="fill-ink-900" />
+      <rect x={x + length / 2} y={y - 4} width={length / 2} height={4} className="fill-white stroke-ink-900" strokeWidth={1} />
+      <text x={x} y={y + 12} className="fill-ink-800 text-[10px]">
+        0
+      </text>
+      <text x={x + length} y={y + 12} textAnchor="end" className="fill-ink-800 text-[10px] tabular-nums">
+        {metres} m
+      </text>
+    </g>
+  );
+}
