@@ -4,6 +4,7 @@ import { sql as rawSql } from "drizzle-orm";
 import { auth } from "../app/features/auth/auth.server";
 import { db, schema, sql } from "../app/infra/db.server";
 import type { Role } from "../app/lib/roles";
+import { seedInventory } from "./demo/inventory";
 
 const password = process.env.DEMO_PASSWORD ?? "isotrope-demo";
 
@@ -35,15 +36,19 @@ async function main() {
   }
   const hash = await (await auth.$context).password.hash(password);
   await db.transaction(async (tx) => {
-    for (const org of organisations) {
+    for (const [index, org] of organisations.entries()) {
       const organizationId = randomUUID();
       await tx.insert(schema.organization).values({ id: organizationId, name: org.name, slug: org.slug });
+      const members: Partial<Record<Role, { userId: string; memberId: string }>> = {};
       for (const person of org.people) {
         const userId = randomUUID();
+        const memberId = randomUUID();
         await tx.insert(schema.user).values({ id: userId, name: person.name, email: person.email, emailVerified: true });
         await tx.insert(schema.account).values({ id: randomUUID(), accountId: userId, providerId: "credential", userId, password: hash });
-        await tx.insert(schema.member).values({ id: randomUUID(), organizationId, userId, role: person.role });
+        await tx.insert(schema.member).values({ id: memberId, organizationId, userId, role: person.role });
+        members[person.role] = { userId, memberId };
       }
+      if (index === 0) await seedInventory(tx, { organizationId, engineerId: members.engineer!.userId, clientMemberId: members.client?.memberId ?? null });
     }
   });
   console.log(`demo scenario seeded: ${organisations.map((o) => o.name).join(", ")}`);

@@ -41,3 +41,46 @@ describe("demo seed", () => {
     expect(await count()).toBe(before);
   });
 });
+
+describe("demo inventory", () => {
+  async function demoOrgId() {
+    const [row] = await db.select({ id: schema.organization.id }).from(schema.organization).where(eq(schema.organization.slug, "kestrel-lane"));
+    return row.id;
+  }
+
+  it("has three invented sites of three kinds, each with a client", async () => {
+    const sites = await db.select().from(schema.site).where(eq(schema.site.organizationId, await demoOrgId()));
+    expect(sites.map((s) => s.kind).sort()).toEqual(["monopole", "rooftop", "street-pole"]);
+    expect(sites.every((s) => s.clientId)).toBe(true);
+  });
+
+  it("puts 12 or more emitters of three operators from 700 MHz to 3.7 GHz on the rooftop, one massive-MIMO with F_PR and TDD", async () => {
+    const [rooftop] = await db.select().from(schema.site).where(eq(schema.site.kind, "rooftop"));
+    const emitters = await db.select().from(schema.emitter).where(eq(schema.emitter.siteId, rooftop.id));
+    expect(emitters.length).toBeGreaterThanOrEqual(12);
+    expect(new Set(emitters.map((e) => e.operator)).size).toBe(3);
+    const f = emitters.map((e) => e.frequencyMHz);
+    expect(Math.min(...f)).toBeGreaterThanOrEqual(700);
+    expect(Math.max(...f)).toBeLessThanOrEqual(3700);
+    expect(emitters.some((e) => e.actualMaxFactor < 1 && e.tddFactor < 1)).toBe(true);
+    const surfaces = await db.select().from(schema.surface).where(eq(schema.surface.siteId, rooftop.id));
+    expect(surfaces.map((s) => s.elevationM).filter((v) => v !== null).sort()).toEqual([-3.5, 0, 4.2]);
+    expect(surfaces.some((s) => s.kind === "facade")).toBe(true);
+  });
+
+  it("binds the demo client member to the rooftop's client, and has a visit with readings and two tabulated patterns", async () => {
+    const [client] = await db
+      .select({ clientId: schema.clientMember.clientId })
+      .from(schema.clientMember)
+      .innerJoin(schema.member, eq(schema.member.id, schema.clientMember.memberId))
+      .innerJoin(schema.user, eq(schema.user.id, schema.member.userId))
+      .where(eq(schema.user.email, "client@demo.isotrope.test"));
+    const [rooftop] = await db.select().from(schema.site).where(eq(schema.site.kind, "rooftop"));
+    expect(client.clientId).toBe(rooftop.clientId);
+    const visits = await db.select().from(schema.visit).where(eq(schema.visit.siteId, rooftop.id));
+    const readings = await db.select().from(schema.reading).where(eq(schema.reading.visitId, visits[0].id));
+    expect(readings.length).toBeGreaterThanOrEqual(5);
+    const patterns = await db.select().from(schema.antennaPattern).where(eq(schema.antennaPattern.organizationId, await demoOrgId()));
+    expect(patterns.filter((p) => p.kind === "tabulated")).toHaveLength(2);
+  });
+});
