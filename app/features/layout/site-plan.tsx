@@ -27,6 +27,9 @@ type Props = {
   children?: (frame: PlanFrame) => ReactNode;
 };
 
+/** Height of the strip under the plan that holds the scale bar and the north arrow, so they never cover the drawing. */
+const FOOTER = 40;
+
 const fills = { public: "url(#plan-public)", workers: "url(#plan-workers)", none: "url(#plan-none)" } as const;
 
 /** Where the backdrop's image pixels land: scale from two points a known distance apart, then rotate about p1 and move p1 to the origin. */
@@ -81,7 +84,7 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
   return (
     <svg
       ref={svgRef}
-      viewBox={`0 0 ${frame.width} ${frame.height}`}
+      viewBox={`0 0 ${frame.width} ${frame.height + FOOTER}`}
       role="img"
       aria-labelledby={titleId}
       className={`block h-auto w-full select-none rounded-card border border-ink-200 bg-white ${onSiteClick ? "cursor-crosshair" : ""}`}
@@ -122,9 +125,7 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
         ) : s.kind === "facade" && s.line ? (
           <g key={s.id}>
             <path d={path(s.line, false)} className={s.id === highlightId ? "stroke-ink-900" : "stroke-ink-800"} strokeWidth={5} strokeLinecap="butt" />
-            <text {...labelAt(frame, s.line[0], s.line[1])} className="fill-ink-800 text-[11px]" textAnchor="middle" dy={-8}>
-              {s.name} (facade)
-            </text>
+            <FacadeLabel frame={frame} line={s.line} text={`${s.name} (facade)`} />
           </g>
         ) : null,
       )}
@@ -162,8 +163,12 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
         </g>
       ) : null}
       {children?.(frame)}
-      <NorthArrow x={frame.width - 28} y={30} />
+      <g aria-hidden="true">
+        <rect x={0} y={frame.height} width={frame.width} height={FOOTER} className="fill-white" />
+        <line x1={0} x2={frame.width} y1={frame.height} y2={frame.height} className="stroke-ink-200" />
+      </g>
       <ScaleBar frame={frame} metres={bar} />
+      <NorthArrow x={frame.width - 24} y={frame.height + 22} />
     </svg>
   );
 }
@@ -173,13 +178,9 @@ function centroid(points: XY[]): XY {
   return [points.reduce((s, p) => s + p[0], 0) / n, points.reduce((s, p) => s + p[1], 0) / n];
 }
 
-function labelAt(frame: PlanFrame, a: XY | number, b?: XY | number) {
-  if (Array.isArray(a) && Array.isArray(b)) {
-    const [x, y] = frame.toPx((a[0] + b[0]) / 2, (a[1] + b[1]) / 2);
-    return { x, y };
-  }
-  const [x, y] = frame.toPx(a as number, b as number);
-  return { x, y };
+function labelAt(frame: PlanFrame, x: number, y: number) {
+  const [px, py] = frame.toPx(x, y);
+  return { x: px, y: py };
 }
 
 function AreaLabel({ frame, surface }: { frame: PlanFrame; surface: PlanSurface }) {
@@ -197,11 +198,26 @@ function AreaLabel({ frame, surface }: { frame: PlanFrame; surface: PlanSurface 
   );
 }
 
+/** The facade's name along its segment, upright whichever way the segment runs. */
+function FacadeLabel({ frame, line, text }: { frame: PlanFrame; line: [XY, XY]; text: string }) {
+  const [a, b] = line.map((p) => frame.toPx(...p));
+  let angle = (Math.atan2(b[1] - a[1], b[0] - a[0]) * 180) / Math.PI;
+  if (angle > 90) angle -= 180;
+  if (angle < -90) angle += 180;
+  const x = (a[0] + b[0]) / 2;
+  const y = (a[1] + b[1]) / 2;
+  return (
+    <text transform={`translate(${x} ${y}) rotate(${angle})`} y={-8} textAnchor="middle" className="fill-ink-800 text-[11px]">
+      {text}
+    </text>
+  );
+}
+
 function NorthArrow({ x, y }: { x: number; y: number }) {
   return (
     <g transform={`translate(${x} ${y})`} aria-hidden="true">
-      <path d="M0 -16 L7 8 L0 3 L-7 8 Z" className="fill-ink-900" />
-      <text y={22} textAnchor="middle" className="fill-ink-900 text-[11px] font-semibold">
+      <path d="M0 -12 L5 6 L0 2 L-5 6 Z" className="fill-ink-900" />
+      <text x={-10} y={5} textAnchor="end" className="fill-ink-900 text-[11px] font-semibold">
         N
       </text>
     </g>
@@ -211,7 +227,7 @@ function NorthArrow({ x, y }: { x: number; y: number }) {
 function ScaleBar({ frame, metres }: { frame: PlanFrame; metres: number }) {
   const length = metres * frame.scale;
   const x = 16;
-  const y = frame.height - 18;
+  const y = frame.height + 20;
   return (
     <g aria-hidden="true">
       <rect x={x} y={y - 4} width={length / 2} height={4} className="fill-ink-900" />
