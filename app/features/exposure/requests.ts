@@ -22,8 +22,9 @@ export type LayoutSurface = {
 /** Contour lines drawn on every map, in % of the chosen tier's limit. */
 export const CONTOUR_PERCENTS = [5, 20, 50, 100, 500];
 
-/** Facade grids stay readable and bounded: at most this many columns and rows. */
+/** Facade grids stay readable and bounded: at most this many columns and rows, and no finer than this step (m). */
 const FACADE_MAX = 200;
+const FACADE_MIN_STEP = 0.5;
 
 const floorTo = (v: number, step: number) => Math.floor(v / step + 1e-9) * step;
 const round6 = (v: number) => Math.round(v * 1e6) / 1e6;
@@ -72,7 +73,7 @@ export function facadeAxes(surface: LayoutSurface, o: ExposureOptions) {
   const length = Math.hypot(bx - ax, by - ay);
   const bottom = surface.bottomM ?? 0;
   const top = surface.topM ?? bottom;
-  const step = Math.max(o.gridStepM, length / (FACADE_MAX - 1), (top - bottom) / (FACADE_MAX - 1));
+  const step = Math.max(o.gridStepM, FACADE_MIN_STEP, length / (FACADE_MAX - 1), (top - bottom) / (FACADE_MAX - 1));
   const along: number[] = [];
   for (let s = 0; s <= length + 1e-9; s += step) along.push(round6(s));
   if (length - along[along.length - 1] > 1e-6) along.push(round6(length));
