@@ -2,7 +2,7 @@
 // organisation does what the page says.
 import { randomUUID } from "node:crypto";
 import { and, eq } from "drizzle-orm";
-import { beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it, vi } from "vitest";
 import { requireMember } from "~/features/auth/guard.server";
 import { db, schema } from "~/infra/db.server";
 import * as account from "~/routes/account/account";
@@ -10,6 +10,22 @@ import * as invite from "~/routes/auth/invite";
 import * as members from "~/routes/members/members";
 import * as signIn from "~/routes/auth/sign-in";
 import { createOrg, freshIp, makeRequest, outcome, password, type Org } from "./fixtures";
+
+// The mail adapter as it is, with a switch to make the next send fail (an SMTP server that's down).
+const mailFailure = vi.hoisted(() => ({ next: false }));
+vi.mock("~/infra/mail.server", async (importOriginal) => {
+  const real = await importOriginal<typeof import("~/infra/mail.server")>();
+  return {
+    ...real,
+    sendMail: async (mail: Parameters<typeof real.sendMail>[0]) => {
+      if (mailFailure.next) {
+        mailFailure.next = false;
+        throw new Error("connect ECONNREFUSED");
+      }
+      return real.sendMail(mail);
+    },
+  };
+});
 
 const args = (request: Request, params: Record<string, string> = {}) => ({ request, params, context: {} }) as never;
 const text = (body: unknown) => JSON.stringify(body);
@@ -44,6 +60,18 @@ describe("invitation form", () => {
     expect(got.status).toBe(400);
     expect(text(got.body)).toContain("Use at most 254 characters.");
     expect(await db.select().from(schema.invitation).where(eq(schema.invitation.organizationId, org.id))).toHaveLength(0);
+  });
+});
+
+describe("an invitation whose mail can't be sent", () => {
+  it("says so and leaves no invitation behind", async () => {
+    const email = `unsent-${randomUUID()}@fixture.test`;
+    mailFailure.next = true;
+    const got = await inviteForm({ email, role: "engineer" });
+    expect(got.status).toBe(503);
+    expect(text(got.body)).toContain("could not be sent, so no invitation was made");
+    expect(await invitationsTo(org.id, email)).toHaveLength(0);
+    expect(await db.select().from(schema.auditEvent).where(eq(schema.auditEvent.organizationId, org.id))).toHaveLength(0);
   });
 });
 
