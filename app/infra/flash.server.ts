@@ -15,12 +15,17 @@ const storage = createCookieSessionStorage<Record<string, never>, { flash: Flash
   },
 });
 
-export async function redirectWithFlash(to: string, flash: Flash, init: { headers?: Headers } = {}) {
+/** `headers` plus the cookie that carries `flash` to the next page shown. */
+export async function withFlash(flash: Flash, headers?: Headers) {
   const session = await storage.getSession();
   session.flash("flash", flash);
-  const headers = new Headers(init.headers);
-  headers.append("set-cookie", await storage.commitSession(session));
-  return redirect(to, { headers });
+  const out = new Headers(headers);
+  out.append("set-cookie", await storage.commitSession(session));
+  return out;
+}
+
+export async function redirectWithFlash(to: string, flash: Flash, init: { headers?: Headers } = {}) {
+  return redirect(to, { headers: await withFlash(flash, init.headers) });
 }
 
 /** Reads (and clears) the pending flash message. */

@@ -1,5 +1,5 @@
 // Builds organisations, members and sessions straight in the database, so tests skip the sign-in pages.
-import { createHmac, randomBytes, randomUUID } from "node:crypto";
+import { createHmac, randomBytes, randomInt, randomUUID } from "node:crypto";
 import { auth } from "~/features/auth/auth.server";
 import { db, schema } from "~/infra/db.server";
 import { CLIENT_ADDRESS_HEADER } from "~/infra/client-address.server";
@@ -49,8 +49,11 @@ export async function createOrg(label: string): Promise<Org> {
 }
 
 let ipCounter = 0;
+// Each test file loads this module afresh but shares the database's rate-limit and throttle rows,
+// so every file draws its own random /16 (a fixed prefix made files reuse each other's addresses).
+const ipPrefix = `${11 + randomInt(200)}.${randomInt(256)}`;
 /** A distinct client address per request builder, so rate limits of different tests don't mix. */
-export const freshIp = () => `10.77.${(ipCounter >> 8) & 255}.${ipCounter++ & 255}`;
+export const freshIp = () => `${ipPrefix}.${(ipCounter >> 8) & 255}.${ipCounter++ & 255}`;
 
 export function makeRequest(path: string, init: { cookie?: string; form?: Record<string, string>; json?: unknown; method?: string; ip?: string } = {}) {
   const headers = new Headers({ origin: env.APP_URL });

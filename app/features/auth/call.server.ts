@@ -6,9 +6,6 @@ import { env } from "~/infra/env.server";
 
 const forwarded = ["cookie", "user-agent", CLIENT_ADDRESS_HEADER, "origin", "referer"];
 
-/** What a person is told when better-auth's rate limit answers 429. */
-export const TOO_MANY_ATTEMPTS = "Too many attempts. Wait a minute, then try again.";
-
 export type AuthResult = { ok: boolean; status: number; code?: string; message?: string; body: unknown; headers: Headers };
 
 export async function callAuth(request: Request, path: string, body?: Record<string, unknown>): Promise<AuthResult> {
@@ -41,3 +38,4 @@ export function cookiesOf(result: AuthResult): Headers {
   for (const cookie of result.headers.getSetCookie()) out.append("set-cookie", cookie);
   return out;
 }
+

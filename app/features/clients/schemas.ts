@@ -5,7 +5,7 @@ import { emailAddress, numberIn, recordId, requiredText, text } from "~/lib/fiel
 export const contactSchema = z.strictObject({
   id: recordId.optional(),
   name: requiredText("the contact's name", 100),
-  email: z.union([z.literal(""), emailAddress]).optional().default(""),
+  email: z.union([z.literal(""), emailAddress("Enter the contact's e-mail address.")]).optional().default(""),
   phone: text(40).default(""),
   role: text(80).default(""),
 });

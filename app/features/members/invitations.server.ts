@@ -8,6 +8,7 @@ import { env } from "~/infra/env.server";
 import { linkMail, sendMail } from "~/infra/mail.server";
 import { audit, type Actor } from "~/lib/audit.server";
 import { DomainError } from "~/lib/domain-error";
+import { invitationProblem } from "./invitation-status";
 import { roleLabels, type Role } from "~/lib/roles";
 
 const { member, invitation, organization, user, account } = schema;
@@ -30,8 +31,13 @@ export async function invitationsFor(email: string) {
     .where(and(eq(invitation.email, email), eq(invitation.status, "pending"), gt(invitation.expiresAt, new Date())));
 }
 
+/**
+ * Sends an invitation. An earlier pending one to the same address becomes "superseded" (its
+ * link then says a newer one replaced it). The mail goes out inside the transaction: if it
+ * can't be sent, no invitation is left behind.
+ */
 export async function inviteMember(actor: Actor & { inviterName: string; organizationName: string }, email: string, role: Role) {
-  const id = await db.transaction(async (tx) => {
+  return db.transaction(async (tx) => {
     const [already] = await tx
       .select({ id: member.id })
       .from(member)
@@ -40,21 +46,23 @@ export async function inviteMember(actor: Actor & { inviterName: string; organiz
     if (already) throw new DomainError("This person is already a member.", 409, "email");
     await tx
       .update(invitation)
-      .set({ status: "canceled" })
+      .set({ status: "superseded" })
       .where(and(eq(invitation.organizationId, actor.organizationId), eq(invitation.email, email), eq(invitation.status, "pending")));
     const id = randomUUID();
     const expiresAt = new Date(Date.now() + INVITATION_DAYS * 86_400_000);
     await tx.insert(invitation).values({ id, organizationId: actor.organizationId, email, role, status: "pending", expiresAt, inviterId: actor.userId });
     await audit(tx, actor, "invitation.created", "invitation", id, { email, role });
+    const mail = linkMail(email, `Join ${actor.organizationName} on Isotrope`, [
+      `${actor.inviterName} invites you to ${actor.organizationName} on Isotrope as ${roleLabels[role]}.`,
+      `The link works for ${INVITATION_DAYS} days. It replaces any earlier invitation from ${actor.organizationName}.`,
+    ], { label: "Accept the invitation", url: `${env.APP_URL}/invite/${id}` });
+    try {
+      await sendMail(mail);
+    } catch {
+      throw new DomainError("The invitation e-mail could not be sent, so no invitation was made. Try again in a moment.", 503);
+    }
     return id;
   });
-  await sendMail(
-    linkMail(email, `Join ${actor.organizationName} on Isotrope`, [
-      `${actor.inviterName} invites you to ${actor.organizationName} on Isotrope as ${roleLabels[role]}.`,
-      `The link works for ${INVITATION_DAYS} days.`,
-    ], { label: "Accept the invitation", url: `${env.APP_URL}/invite/${id}` }),
-  );
-  return id;
 }
 
 export async function cancelInvitation(actor: Actor, invitationId: string) {
@@ -71,17 +79,18 @@ export async function cancelInvitation(actor: Actor, invitationId: string) {
 
 /** An invitation for the public accept page, with why it can't be used, if it can't. */
 export async function findInvitation(invitationId: string) {
+  if (invitationId.length > 100) return null;
   const [row] = await db
-    .select({ id: invitation.id, email: invitation.email, role: invitation.role, status: invitation.status, expiresAt: invitation.expiresAt, organizationId: invitation.organizationId, organizationName: organization.name })
+    .select({
+      id: invitation.id, email: invitation.email, role: invitation.role, status: invitation.status, expiresAt: invitation.expiresAt,
+      organizationId: invitation.organizationId, organizationName: organization.name, inviterName: user.name,
+    })
     .from(invitation)
     .innerJoin(organization, eq(organization.id, invitation.organizationId))
+    .leftJoin(user, eq(user.id, invitation.inviterId))
     .where(eq(invitation.id, invitationId));
   if (!row) return null;
-  const problem =
-    row.status === "accepted" ? "This invitation has already been used." :
-    row.status !== "pending" ? "This invitation was withdrawn. Ask for a new one." :
-    row.expiresAt < new Date() ? "This invitation has expired. Ask for a new one." : null;
-  return { ...row, problem, hasAccount: await accountExists(row.email) };
+  return { ...row, problem: invitationProblem(row), hasAccount: await accountExists(row.email) };
 }
 
 /** Marks the invitation used and adds the membership; fails if someone used it first. */
@@ -95,7 +104,7 @@ async function consumeInvitation(tx: Tx, invitationId: string, userId: string, e
   const [dup] = await tx.select({ id: member.id }).from(member).where(and(eq(member.organizationId, inv.organizationId), eq(member.userId, userId)));
   if (dup) throw new DomainError("You are already a member of this organisation.", 409);
   const memberId = randomUUID();
-  await tx.insert(member).values({ id: memberId, organizationId: inv.organizationId, userId, role: inv.role });
+  await tx.insert(member).values({ id: memberId, organizationId: inv.organizationId, userId, role: inv.role, openedAt: new Date() });
   await audit(tx, { organizationId: inv.organizationId, userId }, "invitation.accepted", "member", memberId, { invitationId, role: inv.role });
   return inv.organizationId;
 }
@@ -114,7 +123,11 @@ export async function acceptAsNewUser(invitationId: string, email: string, name:
   });
 }
 
-/** A signed-in person accepts an invitation sent to their own address. */
+/**
+ * A signed-in person accepts an invitation sent to their own address. Memberships of other
+ * organisations stay; the joined one opens now in every session and at later sign-ins
+ * (member.opened_at), and the account page switches back.
+ */
 export async function acceptAsUser(invitationId: string, userId: string, email: string) {
   return db.transaction(async (tx) => {
     const organizationId = await consumeInvitation(tx, invitationId, userId, email);

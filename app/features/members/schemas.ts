@@ -1,26 +1,28 @@
 // Zod schemas of the organisation and members forms; used in the browser and on the server.
 import { z } from "zod";
-import { email } from "~/features/auth/schemas";
+import { emailAddress, identifier, shortText } from "~/lib/fields";
 import { roles } from "~/lib/roles";
 
+export const ORGANIZATION_NAME_MAX = 120;
+
 export const organizationSchema = z.object({
-  name: z.string({ error: "Name your consultancy." }).trim().min(2, "Name your consultancy.").max(120),
+  name: shortText(ORGANIZATION_NAME_MAX, "Name your consultancy.", 2),
 });
 
 export const inviteSchema = z.object({
   intent: z.literal("invite"),
-  email,
+  email: emailAddress("Enter the e-mail address of the person you are inviting."),
   role: z.enum(roles, { error: "Pick a role." }),
 });
 
 export const changeRoleSchema = z.object({
   intent: z.literal("change-role"),
-  memberId: z.string().min(1),
+  memberId: identifier(),
   role: z.enum(roles, { error: "Pick a role." }),
 });
 
-export const removeMemberSchema = z.object({ intent: z.literal("remove"), memberId: z.string().min(1) });
+export const removeMemberSchema = z.object({ intent: z.literal("remove"), memberId: identifier() });
 
-export const cancelInviteSchema = z.object({ intent: z.literal("cancel-invite"), invitationId: z.string().min(1) });
+export const cancelInviteSchema = z.object({ intent: z.literal("cancel-invite"), invitationId: identifier() });
 
 export const memberActionSchema = z.discriminatedUnion("intent", [inviteSchema, changeRoleSchema, removeMemberSchema, cancelInviteSchema]);

@@ -1,27 +1,42 @@
 import { getFormProps, useForm } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
 import { data, Form } from "react-router";
-import { callAuth, cookiesOf, TOO_MANY_ATTEMPTS } from "~/features/auth/call.server";
+import { callAuth, cookiesOf } from "~/features/auth/call.server";
+import { authMessage } from "~/features/auth/auth-messages";
+import { membershipsOf, switchOrganization } from "~/features/members/organizations.server";
+import { domainErrorReply } from "~/lib/domain-error";
 import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
 import { Card, PageHeader } from "~/components/panels";
 import { inputProps } from "~/lib/conform";
-import { changePasswordSchema } from "~/features/auth/schemas";
-import { redirectWithFlash } from "~/infra/flash.server";
+import { changePasswordSchema, switchOrganizationSchema } from "~/features/auth/schemas";
+import { redirectWithFlash, withFlash } from "~/infra/flash.server";
 import { requireMember } from "~/features/auth/guard.server";
-import { roleLabels } from "~/lib/roles";
+import { isRole, roleLabels } from "~/lib/roles";
 import type { Route } from "./+types/account";
 
 export const meta: Route.MetaFunction = () => [{ title: "Account · Isotrope" }];
 
 export async function loader({ request }: Route.LoaderArgs) {
   const me = await requireMember(request);
-  return { name: me.user.name, email: me.user.email, role: me.role, organizationName: me.organizationName };
+  const others = (await membershipsOf(me.user.id)).filter((m) => m.organizationId !== me.organizationId);
+  return { name: me.user.name, email: me.user.email, role: me.role, organizationName: me.organizationName, others };
 }
 
 export async function action({ request }: Route.ActionArgs) {
-  await requireMember(request);
-  const submission = parseWithZod(await request.formData(), { schema: changePasswordSchema });
+  const me = await requireMember(request);
+  const formData = await request.formData();
+  if (formData.get("intent") === "switch-organization") {
+    const submission = parseWithZod(formData, { schema: switchOrganizationSchema });
+    if (submission.status !== "success") return data(submission.reply(), { status: 400 });
+    try {
+      const name = await switchOrganization(me.user.id, submission.value.organizationId);
+      return redirectWithFlash("/", { kind: "success", message: `You are now working in ${name}.` });
+    } catch (error) {
+      return domainErrorReply(error, submission);
+    }
+  }
+  const submission = parseWithZod(formData, { schema: changePasswordSchema });
   const hide = { hideFields: ["current", "password", "confirm"] };
   if (submission.status !== "success") return data(submission.reply(hide), { status: 400 });
   const result = await callAuth(request, "/change-password", {
@@ -30,17 +45,20 @@ export async function action({ request }: Route.ActionArgs) {
     revokeOtherSessions: true,
   });
   if (!result.ok) {
+    const message = authMessage(result);
     const reply =
-      result.status === 429
-        ? submission.reply({ ...hide, formErrors: [TOO_MANY_ATTEMPTS] })
-        : submission.reply({ ...hide, fieldErrors: { current: ["Your current password is not right."] } });
+      result.code === "INVALID_PASSWORD"
+        ? submission.reply({ ...hide, fieldErrors: { current: [message] } })
+        : submission.reply({ ...hide, formErrors: [message] });
     return data(reply, { status: result.status === 429 ? 429 : 400 });
   }
-  return redirectWithFlash("/account", { kind: "success", message: "Password changed. Other devices are signed out." }, { headers: cookiesOf(result) });
+  // Answer in place with an emptied form (a redirect to the same page would keep the typed passwords).
+  const headers = await withFlash({ kind: "success", message: "Password changed. Other devices are signed out." }, cookiesOf(result));
+  return data(submission.reply({ resetForm: true }), { headers });
 }
 
 export default function Account({ loaderData, actionData }: Route.ComponentProps) {
-  const { name, email, role, organizationName } = loaderData;
+  const { name, email, role, organizationName, others } = loaderData;
   const [form, fields] = useForm({
     lastResult: actionData,
     onValidate: ({ formData }) => parseWithZod(formData, { schema: changePasswordSchema }),
@@ -65,6 +83,7 @@ export default function Account({ loaderData, actionData }: Route.ComponentProps
         </Card>
         <Card title="Change password">
           <Form method="post" {...getFormProps(form)} className="space-y-4">
+            <input type="hidden" name="intent" value="change-password" />
             <FormErrors errors={form.errors} />
             <Field label="Current password" autoComplete="current-password" {...inputProps(fields.current, "password")} />
             <Field label="New password" autoComplete="new-password" hint="At least 10 characters, letters mixed with digits or symbols." {...inputProps(fields.password, "password")} />
@@ -72,6 +91,27 @@ export default function Account({ loaderData, actionData }: Route.ComponentProps
             <Button>Change password</Button>
           </Form>
         </Card>
+        {others.length ? (
+          <Card title="Your other organisations">
+            <p className="mb-3 text-sm text-ink-600">Isotrope opens one organisation at a time; switching also sets where you start next time.</p>
+            <ul className="divide-y divide-ink-100 text-sm">
+              {others.map((o) => (
+                <li key={o.organizationId} className="flex items-center justify-between gap-3 py-2">
+                  <span className="min-w-0 break-words">
+                    {o.organizationName} <span className="text-ink-600">· {isRole(o.role) ? roleLabels[o.role] : o.role}</span>
+                  </span>
+                  <Form method="post">
+                    <input type="hidden" name="intent" value="switch-organization" />
+                    <input type="hidden" name="organizationId" value={o.organizationId} />
+                    <Button tone="secondary" className="px-2.5 py-1" aria-label={`Work in ${o.organizationName}`}>
+                      Work here
+                    </Button>
+                  </Form>
+                </li>
+              ))}
+            </ul>
+          </Card>
+        ) : null}
       </div>
     </>
   );

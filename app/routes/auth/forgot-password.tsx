@@ -2,7 +2,8 @@ import { getFormProps, useForm } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
 import { data, Form } from "react-router";
 import { FooterLink } from "~/components/panels";
-import { callAuth, TOO_MANY_ATTEMPTS } from "~/features/auth/call.server";
+import { callAuth } from "~/features/auth/call.server";
+import { authMessage } from "~/features/auth/auth-messages";
 import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
 import { inputProps } from "~/lib/conform";
@@ -16,8 +17,8 @@ export async function action({ request }: Route.ActionArgs) {
   const submission = parseWithZod(await request.formData(), { schema: forgotSchema });
   if (submission.status !== "success") return data(submission.reply(), { status: 400 });
   const result = await callAuth(request, "/request-password-reset", { email: submission.value.email, redirectTo: "/reset-password" });
-  if (result.status === 429) return data(submission.reply({ formErrors: [TOO_MANY_ATTEMPTS] }), { status: 429 });
-  // The same answer whether or not the address has an account.
+  if (result.status === 429) return data(submission.reply({ formErrors: [authMessage(result)] }), { status: 429 });
+  // The same answer, in the same time (the mail goes out afterwards), whether or not the address has an account.
   return redirectWithFlash("/sign-in", { kind: "info", message: "If that address has an account, a reset link is on its way. It works once, for one hour." });
 }
 

@@ -10,6 +10,9 @@ import { redirectWithFlash } from "~/infra/flash.server";
 import { acceptAsNewUser, acceptAsUser, findInvitation } from "~/features/members/invitations.server";
 import { DomainError } from "~/lib/domain-error";
 import { getSignedIn } from "~/features/auth/guard.server";
+import { nextStepAfter } from "~/features/members/invitation-status";
+import { membershipsOf } from "~/features/members/organizations.server";
+import { FooterLink } from "~/components/panels";
 import { isRole, roleLabels } from "~/lib/roles";
 import type { Route } from "./+types/invite";
 
@@ -26,6 +29,7 @@ const refusal = (message: string, status: number) => data({ status: "error" as c
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const { invitation, signedIn } = await load(request, params.invitationId);
+  const mine = signedIn?.user.email === invitation.email ? await membershipsOf(signedIn.user.id) : [];
   const view = {
     id: invitation.id,
     email: invitation.email,
@@ -34,6 +38,9 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     problem: invitation.problem,
     hasAccount: invitation.hasAccount,
     signedInEmail: signedIn?.user.email ?? null,
+    next: nextStepAfter(Boolean(signedIn)),
+    // Where the person already works: joining keeps those memberships (acceptAsUser).
+    otherOrganizations: mine.filter((m) => m.organizationId !== invitation.organizationId).map((m) => m.organizationName),
   };
   return data(view, { status: invitation.problem ? 410 : 200 });
 }
@@ -59,6 +66,8 @@ export async function action({ request, params }: Route.ActionArgs) {
   }
 }
 
+const listNames = (names: string[]) => (names.length < 2 ? names.join("") : `${names.slice(0, -1).join(", ")} and ${names.at(-1)}`);
+
 export default function Invite({ loaderData, actionData }: Route.ComponentProps) {
   const v = loaderData;
   const [form, fields] = useForm({
@@ -75,6 +84,7 @@ export default function Invite({ loaderData, actionData }: Route.ComponentProps)
         <p role="alert" className="text-sm text-ink-600">
           {v.problem}
         </p>
+        <FooterLink to={v.next.to}>{v.next.label}</FooterLink>
       </>
     );
   }
@@ -90,6 +100,13 @@ export default function Invite({ loaderData, actionData }: Route.ComponentProps)
         {intro}
         {v.signedInEmail === v.email ? (
           <Form method="post" className="space-y-4">
+            {v.otherOrganizations.length ? (
+              <p className="text-sm text-ink-600">
+                You are a member of {listNames(v.otherOrganizations)}. Joining adds {v.organizationName}: you stay a member of{" "}
+                {v.otherOrganizations.length > 1 ? "them" : "it"}, and Isotrope opens {v.organizationName} from now on. You can switch
+                back on your Account page.
+              </p>
+            ) : null}
             <FormErrors errors={form.errors} />
             <Button className="w-full">Join the organisation</Button>
           </Form>

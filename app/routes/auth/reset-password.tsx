@@ -8,16 +8,19 @@ import { Field, FormErrors } from "~/components/field";
 import { inputProps } from "~/lib/conform";
 import { resetSchema } from "~/features/auth/schemas";
 import { redirectWithFlash } from "~/infra/flash.server";
+import { authMessage } from "~/features/auth/auth-messages";
+import { resetLinkIsLive } from "~/features/auth/accounts.server";
 import type { Route } from "./+types/reset-password";
 
 export const meta: Route.MetaFunction = () => [{ title: "Choose a new password · Isotrope" }];
 
 const badLink = "This reset link has expired or was already used. Ask for a new one.";
 
-export function loader({ request }: Route.LoaderArgs) {
+// The link is checked before the form is shown, so a forged or spent one is refused at once.
+export async function loader({ request }: Route.LoaderArgs) {
   const params = new URL(request.url).searchParams;
   const token = params.get("token");
-  if (params.get("error") || !token) return data({ token: null, problem: badLink }, { status: 400 });
+  if (params.get("error") || !token || !(await resetLinkIsLive(token))) return data({ token: null, problem: badLink }, { status: 400 });
   return { token, problem: null };
 }
 
@@ -25,7 +28,10 @@ export async function action({ request }: Route.ActionArgs) {
   const submission = parseWithZod(await request.formData(), { schema: resetSchema });
   if (submission.status !== "success") return data(submission.reply({ hideFields: ["password", "confirm"] }), { status: 400 });
   const result = await callAuth(request, "/reset-password", { newPassword: submission.value.password, token: submission.value.token });
-  if (!result.ok) return data(submission.reply({ formErrors: [badLink], hideFields: ["password", "confirm"] }), { status: 400 });
+  if (!result.ok) {
+    const reply = submission.reply({ formErrors: [authMessage(result, badLink)], hideFields: ["password", "confirm"] });
+    return data(reply, { status: result.status === 429 ? 429 : 400 });
+  }
   return redirectWithFlash("/sign-in", { kind: "success", message: "Your password is changed. Sign in with the new one." });
 }
 

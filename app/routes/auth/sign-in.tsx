@@ -1,7 +1,8 @@
 import { getFormProps, useForm } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
 import { data, Form, Link, redirect, useNavigation, useSearchParams } from "react-router";
-import { callAuth, cookiesOf, TOO_MANY_ATTEMPTS } from "~/features/auth/call.server";
+import { callAuth, cookiesOf } from "~/features/auth/call.server";
+import { authMessage } from "~/features/auth/auth-messages";
 import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
 import { inputProps } from "~/lib/conform";
@@ -18,16 +19,11 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 export async function action({ request }: Route.ActionArgs) {
   const submission = parseWithZod(await request.formData(), { schema: signInSchema });
-  if (submission.status !== "success") return data(submission.reply(), { status: 400 });
+  if (submission.status !== "success") return data(submission.reply({ hideFields: ["password"] }), { status: 400 });
   const { email, password, redirectTo } = submission.value;
   const result = await callAuth(request, "/sign-in/email", { email, password, callbackURL: "/verified" });
   if (result.ok) return redirect(safeRedirect(redirectTo), { headers: cookiesOf(result) });
-  const message =
-    result.status === 429
-      ? TOO_MANY_ATTEMPTS
-      : result.code === "EMAIL_NOT_VERIFIED"
-        ? "Confirm your e-mail address first: we have sent you a new link."
-        : "That e-mail and password do not match an account.";
+  const message = authMessage(result, "That e-mail and password do not match an account.");
   return data(submission.reply({ formErrors: [message], hideFields: ["password"] }), { status: result.status === 429 ? 429 : 400 });
 }
 

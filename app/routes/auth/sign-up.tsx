@@ -1,12 +1,13 @@
 import { getFormProps, useForm } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
 import { data, Form, Link, redirect, useNavigation } from "react-router";
-import { callAuth, TOO_MANY_ATTEMPTS } from "~/features/auth/call.server";
+import { callAuth } from "~/features/auth/call.server";
+import { authMessage } from "~/features/auth/auth-messages";
+import { rememberPendingAddress } from "~/features/auth/pending-address.server";
 import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
 import { inputProps } from "~/lib/conform";
 import { signUpSchema } from "~/features/auth/schemas";
-import { accountExists } from "~/features/auth/accounts.server";
 import { getSignedIn } from "~/features/auth/guard.server";
 import type { Route } from "./+types/sign-up";
 
@@ -17,24 +18,17 @@ export async function loader({ request }: Route.LoaderArgs) {
   return null;
 }
 
-const taken = "An account with this e-mail already exists. Sign in, or reset the password.";
-
+// A taken address gets exactly the answer a new one gets (better-auth answers alike when
+// e-mail confirmation is required); its owner is told by mail (auth.server.ts).
 export async function action({ request }: Route.ActionArgs) {
   const submission = parseWithZod(await request.formData(), { schema: signUpSchema });
-  if (submission.status !== "success") return data(submission.reply({ hideFields: ["password", "confirm"] }), { status: 400 });
+  const hide = { hideFields: ["password", "confirm"] };
+  if (submission.status !== "success") return data(submission.reply(hide), { status: 400 });
   const { name, email, password } = submission.value;
-  if (await accountExists(email)) {
-    return data(
-      submission.reply({ fieldErrors: { email: [taken] }, hideFields: ["password", "confirm"] }),
-      { status: 409 },
-    );
-  }
   const result = await callAuth(request, "/sign-up/email", { name, email, password, callbackURL: "/verified" });
-  if (result.ok) return redirect(`/check-email?email=${encodeURIComponent(email)}`);
-  if (result.status === 429) {
-    return data(submission.reply({ formErrors: [TOO_MANY_ATTEMPTS] }), { status: 429 });
-  }
-  return data(submission.reply({ formErrors: [result.message ?? "The account could not be created."], hideFields: ["password", "confirm"] }), { status: 400 });
+  if (result.ok) return redirect("/check-email", { headers: await rememberPendingAddress(email) });
+  const message = authMessage(result, "The account could not be created. Check the name and address, then try again.");
+  return data(submission.reply({ ...hide, formErrors: [message] }), { status: result.status === 429 ? 429 : 400 });
 }
 
 export default function SignUp({ actionData }: Route.ComponentProps) {

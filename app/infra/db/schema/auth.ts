@@ -79,6 +79,9 @@ export const member = pgTable(
     userId: text("user_id").notNull().references(() => user.id, { onDelete: "cascade" }),
     role: text("role").notNull(),
     createdAt: createdAt(),
+    // When the person last chose to work in this organisation (joined it or switched to it);
+    // a new session opens the most recent one. Ours, not better-auth's.
+    openedAt: timestamp("opened_at", { withTimezone: true }),
   },
   (t) => [uniqueIndex("member_org_user_idx").on(t.organizationId, t.userId), index("member_user_idx").on(t.userId)],
 );

@@ -7,3 +7,4 @@ export * from "./sites";
 export * from "./emitters";
 export * from "./visits";
 export * from "./tokens";
+export * from "./auth-throttle";
