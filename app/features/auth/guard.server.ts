@@ -1,34 +1,25 @@
 // The one guard every loader and action starts with: who is signed in, in which
 // organisation, with which role. Queries downstream scope by `member.organizationId`.
-import { asc, eq } from "drizzle-orm";
+// Pass the loader's or action's arguments ({ request, context }) so that the layout and the page
+// share one session lookup per request (session-context.server.ts); a bare Request works too.
 import { data, redirect } from "react-router";
-import { auth } from "~/features/auth/auth.server";
-import { db, schema } from "~/infra/db.server";
-import { isRole, type Role } from "~/lib/roles";
+import { lookupOf, type GuardArgs, type Membership, type SignedIn } from "~/features/auth/session-context.server";
+import type { Role } from "~/lib/roles";
 
-export type SignedIn = Awaited<ReturnType<typeof getSignedIn>>;
-export type Member = NonNullable<Awaited<ReturnType<typeof findMembership>>> & { user: NonNullable<SignedIn>["user"] };
+export { findMembership } from "~/features/auth/session-context.server";
+export type { GuardArgs, SignedIn };
+export type Member = Membership & { user: NonNullable<SignedIn>["user"] };
 
-export async function getSignedIn(request: Request) {
-  return auth.api.getSession({ headers: request.headers });
+const requestOf = (args: GuardArgs) => (args instanceof Request ? args : args.request);
+
+/** The session and its user, or null. */
+export function getSignedIn(args: GuardArgs) {
+  return lookupOf(args).signedIn();
 }
 
-/** The user's membership: the session's active organisation, else the oldest. */
-export async function findMembership(userId: string, activeOrganizationId?: string | null) {
-  const rows = await db
-    .select({
-      memberId: schema.member.id,
-      role: schema.member.role,
-      organizationId: schema.organization.id,
-      organizationName: schema.organization.name,
-    })
-    .from(schema.member)
-    .innerJoin(schema.organization, eq(schema.organization.id, schema.member.organizationId))
-    .where(eq(schema.member.userId, userId))
-    .orderBy(asc(schema.member.createdAt));
-  const row = rows.find((r) => r.organizationId === activeOrganizationId) ?? rows[0];
-  if (!row || !isRole(row.role)) return null;
-  return { ...row, role: row.role as Role };
+/** The signed-in user's membership (the session's active organisation, else the oldest), or null. */
+export function getMembership(args: GuardArgs) {
+  return lookupOf(args).membership();
 }
 
 function signInRedirect(request: Request) {
@@ -38,10 +29,11 @@ function signInRedirect(request: Request) {
 }
 
 /** Page guard: redirects to sign-in without a session, to /welcome without an organisation, 403 for other roles. */
-export async function requireMember(request: Request, options: { roles?: readonly Role[] } = {}): Promise<Member> {
-  const signedIn = await getSignedIn(request);
-  if (!signedIn) throw signInRedirect(request);
-  const membership = await findMembership(signedIn.user.id, signedIn.session.activeOrganizationId);
+export async function requireMember(args: GuardArgs, options: { roles?: readonly Role[] } = {}): Promise<Member> {
+  const lookup = lookupOf(args);
+  const signedIn = await lookup.signedIn();
+  if (!signedIn) throw signInRedirect(requestOf(args));
+  const membership = await lookup.membership();
   if (!membership) throw redirect("/welcome");
   if (options.roles && !options.roles.includes(membership.role)) {
     throw data({ message: "Your role does not give access to this page." }, { status: 403 });
@@ -50,17 +42,18 @@ export async function requireMember(request: Request, options: { roles?: readonl
 }
 
 /** Page guard for signed-in users who may not have an organisation yet. */
-export async function requireUser(request: Request) {
-  const signedIn = await getSignedIn(request);
-  if (!signedIn) throw signInRedirect(request);
+export async function requireUser(args: GuardArgs) {
+  const signedIn = await lookupOf(args).signedIn();
+  if (!signedIn) throw signInRedirect(requestOf(args));
   return signedIn;
 }
 
 /** API guard: JSON 401 / 403 instead of redirects. */
-export async function requireApiMember(request: Request, options: { roles?: readonly Role[] } = {}): Promise<Member> {
-  const signedIn = await getSignedIn(request);
+export async function requireApiMember(args: GuardArgs, options: { roles?: readonly Role[] } = {}): Promise<Member> {
+  const lookup = lookupOf(args);
+  const signedIn = await lookup.signedIn();
   if (!signedIn) throw Response.json({ error: "Sign in first." }, { status: 401 });
-  const membership = await findMembership(signedIn.user.id, signedIn.session.activeOrganizationId);
+  const membership = await lookup.membership();
   if (!membership) throw Response.json({ error: "You belong to no organisation." }, { status: 403 });
   if (options.roles && !options.roles.includes(membership.role)) {
     throw Response.json({ error: "Your role does not allow this." }, { status: 403 });

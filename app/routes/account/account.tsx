@@ -6,6 +6,7 @@ import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
 import { Card, PageHeader } from "~/components/panels";
 import { inputProps } from "~/lib/conform";
+import { parseForm } from "~/lib/form.server";
 import { changePasswordSchema } from "~/features/auth/schemas";
 import { redirectWithFlash } from "~/infra/flash.server";
 import { requireMember } from "~/features/auth/guard.server";
@@ -14,14 +15,14 @@ import type { Route } from "./+types/account";
 
 export const meta: Route.MetaFunction = () => [{ title: "Account · Isotrope" }];
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const me = await requireMember(request);
+export async function loader(args: Route.LoaderArgs) {
+  const me = await requireMember(args);
   return { name: me.user.name, email: me.user.email, role: me.role, organizationName: me.organizationName };
 }
 
-export async function action({ request }: Route.ActionArgs) {
-  await requireMember(request);
-  const submission = parseWithZod(await request.formData(), { schema: changePasswordSchema });
+export async function action({ request, context }: Route.ActionArgs) {
+  await requireMember({ request, context });
+  const submission = await parseForm(request, changePasswordSchema);
   const hide = { hideFields: ["current", "password", "confirm"] };
   if (submission.status !== "success") return data(submission.reply(hide), { status: 400 });
   const result = await callAuth(request, "/change-password", {

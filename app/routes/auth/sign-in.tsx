@@ -5,6 +5,7 @@ import { callAuth, cookiesOf, TOO_MANY_ATTEMPTS } from "~/features/auth/call.ser
 import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
 import { inputProps } from "~/lib/conform";
+import { parseForm } from "~/lib/form.server";
 import { safeRedirect, signInSchema } from "~/features/auth/schemas";
 import { getSignedIn } from "~/features/auth/guard.server";
 import type { Route } from "./+types/sign-in";
@@ -17,7 +18,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 }
 
 export async function action({ request }: Route.ActionArgs) {
-  const submission = parseWithZod(await request.formData(), { schema: signInSchema });
+  const submission = await parseForm(request, signInSchema);
   if (submission.status !== "success") return data(submission.reply(), { status: 400 });
   const { email, password, redirectTo } = submission.value;
   const result = await callAuth(request, "/sign-in/email", { email, password, callbackURL: "/verified" });

@@ -5,6 +5,7 @@ import { callAuth, TOO_MANY_ATTEMPTS } from "~/features/auth/call.server";
 import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
 import { inputProps } from "~/lib/conform";
+import { parseForm } from "~/lib/form.server";
 import { signUpSchema } from "~/features/auth/schemas";
 import { accountExists } from "~/features/auth/accounts.server";
 import { getSignedIn } from "~/features/auth/guard.server";
@@ -20,7 +21,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 const taken = "An account with this e-mail already exists. Sign in, or reset the password.";
 
 export async function action({ request }: Route.ActionArgs) {
-  const submission = parseWithZod(await request.formData(), { schema: signUpSchema });
+  const submission = await parseForm(request, signUpSchema);
   if (submission.status !== "success") return data(submission.reply({ hideFields: ["password", "confirm"] }), { status: 400 });
   const { name, email, password } = submission.value;
   if (await accountExists(email)) {
