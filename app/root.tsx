@@ -1,3 +1,5 @@
+// First: Zod must not probe for eval before any form schema is built (see the module).
+import "~/lib/zod-config";
 import { useEffect } from "react";
 import { isRouteErrorResponse, Links, Meta, Outlet, Scripts, ScrollRestoration } from "react-router";
 import type { Route } from "./+types/root";

@@ -3,6 +3,9 @@
 // DEVELOPERS.md). The targets take turns in short rounds, so that a busy neighbour on a shared
 // machine weighs on all three alike. Prints figures; asserts nothing.
 //   npm run -s bench:http -- [base URL]      BENCH_SECONDS=10 BENCH_ROUNDS=3 BENCH_CONNECTIONS=10
+// With APP_PID (set by `with-stack` when it starts the app) it also prints the server's CPU time
+// per request, read from /proc: a figure that a busy machine disturbs far less than requests/s.
+import { readFileSync } from "node:fs";
 import autocannon from "autocannon";
 
 const base = (process.argv[2] ?? process.env.BENCH_URL ?? "http://127.0.0.1:3000").replace(/\/$/, "");
@@ -32,6 +35,18 @@ function run(path, headers, duration) {
   });
 }
 
+const appPid = process.env.APP_PID;
+/** The server process's user + system CPU time in ms (Linux), or null. */
+function serverCpuMs() {
+  if (!appPid) return null;
+  try {
+    const fields = readFileSync(`/proc/${appPid}/stat`, "utf8").split(") ")[1].split(" ");
+    return (Number(fields[11]) + Number(fields[12])) * 10; // clock ticks of 10 ms
+  } catch {
+    return null;
+  }
+}
+
 const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
 async function main() {
@@ -48,8 +63,14 @@ async function main() {
   console.log(`${base}: ${connections} connections, ${rounds} rounds × ${(seconds / rounds).toFixed(1)} s per target, signed in as ${email}`);
   for (const t of targets) await run(t.path, t.headers, 1); // warm-up, not counted
   const results = targets.map(() => []);
+  const cpu = targets.map(() => 0);
   for (let r = 0; r < rounds; r++) {
-    for (const [i, t] of targets.entries()) results[i].push(await run(t.path, t.headers, seconds / rounds));
+    for (const [i, t] of targets.entries()) {
+      const before = serverCpuMs();
+      results[i].push(await run(t.path, t.headers, seconds / rounds));
+      const after = serverCpuMs();
+      if (before !== null && after !== null) cpu[i] += after - before;
+    }
   }
   const rows = targets.map((t, i) => {
     const runs = results[i];
@@ -63,10 +84,12 @@ async function main() {
       requests: total,
       "non-2xx": runs.reduce((n, x) => n + x.non2xx, 0),
       errors: runs.reduce((n, x) => n + x.errors + x.timeouts, 0),
+      ...(appPid ? { "server CPU ms/request": Number((cpu[i] / total).toFixed(2)) } : {}),
     };
   });
   console.table(rows);
   console.log(`overview / health throughput: ${((100 * rows[2]["req/s"]) / rows[0]["req/s"]).toFixed(0)} %`);
+  if (appPid) console.log(`health / overview server CPU per request: ${((100 * cpu[0] / rows[0].requests) / (cpu[2] / rows[2].requests)).toFixed(0)} %`);
 }
 
 main().catch((error) => {

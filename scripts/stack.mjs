@@ -221,7 +221,8 @@ async function startApp(env) {
     background("app", process.execPath, [server, "--dev"], { ...env, HOST: "127.0.0.1", NODE_ENV: "development" });
   } else {
     if (mode !== "test") run("npm", ["run", "-s", "build"], { cwd: root });
-    background("app", process.execPath, [server], { ...env, HOST: "127.0.0.1", NODE_ENV: "production", BUILD_DIR: buildDir });
+    const app = background("app", process.execPath, [server], { ...env, HOST: "127.0.0.1", NODE_ENV: "production", BUILD_DIR: buildDir });
+    process.env.APP_PID = String(app.pid); // for `with-stack -- npm run bench:http` (server CPU per request)
   }
   await waitForHttp(`${env.APP_URL}/api/health`, "the app", 120);
 }

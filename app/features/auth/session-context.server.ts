@@ -1,7 +1,7 @@
 // Who is signed in, resolved at most once per request. The root middleware puts a lazy lookup into
 // React Router's request context; the layout's loader and the page's guard share it, and a page
-// that never asks costs nothing. The guards fall back to a fresh lookup when no context is there
-// (loaders called directly, as the integration tests do).
+// that never asks costs nothing. Where no middleware ran (loaders called directly, as the
+// integration tests do) the lookup is kept per Request object instead.
 import { asc, eq } from "drizzle-orm";
 import { createContext, type MiddlewareFunction } from "react-router";
 import { auth } from "~/features/auth/auth.server";
@@ -51,9 +51,17 @@ export const sessionMiddleware: MiddlewareFunction<Response> = ({ request, conte
 
 export type GuardArgs = Request | { request: Request; context?: unknown };
 
-/** The request's shared lookup, or a fresh one where no middleware ran. */
+const byRequest = new WeakMap<Request, SessionLookup>();
+
+function perRequest(request: Request) {
+  let lookup = byRequest.get(request);
+  if (!lookup) byRequest.set(request, (lookup = sessionLookup(request)));
+  return lookup;
+}
+
+/** The request's shared lookup: from the middleware's context, else kept per Request object. */
 export function lookupOf(args: GuardArgs): SessionLookup {
-  if (args instanceof Request) return sessionLookup(args);
+  if (args instanceof Request) return perRequest(args);
   const context = args.context as { get?: (key: typeof sessionContext) => SessionLookup | null } | undefined;
-  return (typeof context?.get === "function" ? context.get(sessionContext) : null) ?? sessionLookup(args.request);
+  return (typeof context?.get === "function" ? context.get(sessionContext) : null) ?? perRequest(args.request);
 }
