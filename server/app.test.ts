@@ -90,7 +90,7 @@ describe("origin", () => {
     expect(seen.length).toBe(before);
   });
   it("lets same-origin writes, its loopback twin and Origin-less clients through", async () => {
-    for (const headers of [{ origin: APP_URL }, { origin: "http://localhost:3999" }, {}]) {
+    for (const headers of [{ origin: APP_URL }, { origin: "http://localhost:3999" }, {}] as Record<string, string>[]) {
       expect((await send(port, { method: "POST", path: "/sign-out", headers })).status).toBe(200);
     }
   });
