@@ -62,19 +62,24 @@ export function inspectMultipart(body, contentType) {
     /** @type {Refusal | null} */
     let refusal = null;
     const refuse = (/** @type {Refusal} */ r) => (refusal ??= r);
+    // busboy reports a part without a name (name="") with an undefined name.
     parser.on("field", (name, value) => {
-      const r = checkFieldName(name) ?? (value.includes("\0") ? NUL_REFUSED : null);
+      const r = checkFieldName(name ?? "") ?? (value.includes("\0") ? NUL_REFUSED : null);
       if (r) refuse(r);
     });
     parser.on("file", (name, stream, info) => {
-      const r = checkFieldName(name) ?? (info.filename?.includes("\0") ? NUL_REFUSED : null);
+      const r = checkFieldName(name ?? "") ?? (info.filename?.includes("\0") ? NUL_REFUSED : null);
       if (r) refuse(r);
       stream.resume();
     });
     parser.on("partsLimit", () => refuse(TOO_MANY));
     parser.on("error", () => resolve(refusal ?? { status: 400, message: "The multipart body is malformed." }));
     parser.on("close", () => resolve(refusal));
-    parser.end(body);
+    try {
+      parser.end(body);
+    } catch {
+      resolve({ status: 400, message: "The multipart body is malformed." });
+    }
   });
 }
 

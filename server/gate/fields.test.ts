@@ -59,6 +59,9 @@ describe("multipart bodies", () => {
     expect(await inspectMultipart(multipart([field("email[5000]", "x")]), type)).toMatchObject({ status: 400 });
     expect(await inspectMultipart(multipart([field("name", "a\0b")]), type)).toMatchObject({ status: 400 });
   });
+  it("takes a part with an empty name", async () => {
+    expect(await inspectMultipart(multipart([field("", "x")]), type)).toBeNull();
+  });
   it("refuses a body cut before its closing boundary", async () => {
     expect(await inspectMultipart(Buffer.from(`--XyZ\r\n${field("a", "1")}`), type)).toMatchObject({ status: 400 });
   });
