@@ -35,12 +35,15 @@ async function development() {
   return { getHandler: async () => handler, mountAssets: (/** @type {import("express").Express} */ app) => app.use(vite.middlewares), close: () => vite.close() };
 }
 
-let trustedProxies;
 try {
-  trustedProxies = parseTrustedProxies(process.env.TRUSTED_PROXIES);
+  const trustedProxies = parseTrustedProxies(process.env.TRUSTED_PROXIES);
   const mode = dev ? await development() : await production();
   server.on("request", createApp({ appUrl, trustedProxies, ...mode }));
   server.on("connect", refuseConnect);
+  server.on("error", (error) => {
+    console.error(`[isotrope] the server stopped: ${error.message}`);
+    process.exit(1);
+  });
   server.listen(port, host, () => console.log(`[isotrope] ${dev ? "development" : "production"} server on ${host ?? "all interfaces"}:${port}, public address ${appUrl}`));
   const stop = () => {
     server.close();
