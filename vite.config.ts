@@ -11,7 +11,7 @@ export default defineConfig({
     projects: [
       {
         extends: true,
-        test: { name: "unit", include: ["app/**/*.test.ts", "tests/cli/**/*.test.ts"], environment: "node" },
+        test: { name: "unit", include: ["app/**/*.test.ts", "server/**/*.test.ts", "tests/cli/**/*.test.ts"], environment: "node" },
       },
       {
         extends: true,

@@ -1,7 +1,13 @@
+// First: Zod must not probe for eval before any form schema is built (see the module).
+import "~/lib/zod-config";
 import { useEffect } from "react";
 import { isRouteErrorResponse, Links, Meta, Outlet, Scripts, ScrollRestoration } from "react-router";
 import type { Route } from "./+types/root";
+import { sessionMiddleware } from "~/features/auth/session-context.server";
 import "./app.css";
+
+/** One session lookup per request, shared by the layout and the page (guard.server.ts). */
+export const middleware: Route.MiddlewareFunction[] = [sessionMiddleware];
 
 export const links: Route.LinksFunction = () => [{ rel: "icon", href: "/favicon.svg", type: "image/svg+xml" }];
 

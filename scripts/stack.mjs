@@ -215,11 +215,15 @@ async function services() {
 }
 
 async function startApp(env) {
+  // server/index.mjs: the same gate in development (Vite in middleware mode) and production (the build).
+  const server = join(root, "server/index.mjs");
   if (mode === "dev") {
-    background("app", join(root, "node_modules/.bin/react-router"), ["dev", "--host", "127.0.0.1", "--port", String(ports.app), "--strictPort"], env);
+    background("app", process.execPath, [server, "--dev"], { ...env, HOST: process.env.HOST ?? "127.0.0.1", NODE_ENV: "development" });
   } else {
     if (mode !== "test") run("npm", ["run", "-s", "build"], { cwd: root });
-    background("app", join(root, "node_modules/.bin/react-router-serve"), [join(root, buildDir, "server/index.js")], { ...env, HOST: "127.0.0.1", NODE_ENV: "production" });
+    const host = mode === "test" ? "127.0.0.1" : (process.env.HOST ?? "127.0.0.1");
+    const app = background("app", process.execPath, [server], { ...env, HOST: host, NODE_ENV: "production", BUILD_DIR: buildDir });
+    process.env.APP_PID = String(app.pid); // for `with-stack -- npm run bench:http` (server CPU per request)
   }
   await waitForHttp(`${env.APP_URL}/api/health`, "the app", 120);
 }

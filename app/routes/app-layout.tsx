@@ -1,15 +1,14 @@
 import { data, Form, NavLink, Outlet } from "react-router";
 import { FlashMessage } from "~/components/panels";
 import { takeFlash } from "~/infra/flash.server";
-import { findMembership, getSignedIn } from "~/features/auth/guard.server";
+import { getMembership, getSignedIn } from "~/features/auth/guard.server";
 import { roleLabels, sectionsFor } from "~/lib/roles";
 import type { Route } from "./+types/app-layout";
 
-// The shell only reads who is signed in; each page below runs its own guard.
-export async function loader({ request }: Route.LoaderArgs) {
-  const signedIn = await getSignedIn(request);
-  const membership = signedIn ? await findMembership(signedIn.user.id, signedIn.session.activeOrganizationId) : null;
-  const { flash, headers } = await takeFlash(request);
+// The shell only reads who is signed in (the same lookup the page's guard uses); each page below runs its own guard.
+export async function loader(args: Route.LoaderArgs) {
+  const [signedIn, membership] = await Promise.all([getSignedIn(args), getMembership(args)]);
+  const { flash, headers } = await takeFlash(args.request);
   return data(
     {
       flash,

@@ -8,8 +8,8 @@ import type { Route } from "./+types/overview";
 
 export const meta: Route.MetaFunction = () => [{ title: "Overview · Isotrope" }];
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const member = await requireMember(request);
+export async function loader(args: Route.LoaderArgs) {
+  const member = await requireMember(args);
   const team = member.role === "owner" ? await teamCounts(member.organizationId) : null;
   return { name: member.user.name, role: member.role, organizationName: member.organizationName, team };
 }

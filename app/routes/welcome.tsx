@@ -5,25 +5,26 @@ import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
 import { Card, PageHeader } from "~/components/panels";
 import { inputProps } from "~/lib/conform";
+import { parseForm } from "~/lib/form.server";
 import { organizationSchema } from "~/features/members/schemas";
 import { redirectWithFlash } from "~/infra/flash.server";
 import { invitationsFor } from "~/features/members/invitations.server";
 import { createOrganization } from "~/features/members/organizations.server";
 import { domainErrorReply } from "~/lib/domain-error";
-import { findMembership, requireUser } from "~/features/auth/guard.server";
+import { getMembership, requireUser } from "~/features/auth/guard.server";
 import type { Route } from "./+types/welcome";
 
 export const meta: Route.MetaFunction = () => [{ title: "Set up your organisation · Isotrope" }];
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const { user } = await requireUser(request);
-  if (await findMembership(user.id)) throw redirect("/");
+export async function loader(args: Route.LoaderArgs) {
+  const { user } = await requireUser(args);
+  if (await getMembership(args)) throw redirect("/");
   return { invitations: await invitationsFor(user.email) };
 }
 
-export async function action({ request }: Route.ActionArgs) {
-  const { user } = await requireUser(request);
-  const submission = parseWithZod(await request.formData(), { schema: organizationSchema });
+export async function action({ request, context }: Route.ActionArgs) {
+  const { user } = await requireUser({ request, context });
+  const submission = await parseForm(request, organizationSchema);
   if (submission.status !== "success") return data(submission.reply(), { status: 400 });
   try {
     await createOrganization(user.id, submission.value.name);

@@ -1,38 +1,29 @@
 // The one guard every loader and action starts with: who is signed in, in which
 // organisation, with which role. Queries downstream scope by `member.organizationId`.
-import { asc, eq } from "drizzle-orm";
+// Pass the loader's or action's arguments ({ request, context }) so that the layout and the page
+// share one session lookup per request (session-context.server.ts); a bare Request works too.
 import { data, redirect } from "react-router";
-import { auth } from "~/features/auth/auth.server";
+import { eq } from "drizzle-orm";
+import { findMembership, lookupOf, type GuardArgs, type Membership, type SignedIn } from "~/features/auth/session-context.server";
 import { resolveToken } from "~/features/auth/tokens.server";
-import { apiError } from "~/lib/api.server";
 import { db, schema } from "~/infra/db.server";
-import { isRole, type Role } from "~/lib/roles";
+import { apiError } from "~/lib/api.server";
+import type { Role } from "~/lib/roles";
 
-export type SignedIn = Awaited<ReturnType<typeof getSignedIn>>;
-export type Member = NonNullable<Awaited<ReturnType<typeof findMembership>>> & { user: NonNullable<SignedIn>["user"] };
+export { findMembership } from "~/features/auth/session-context.server";
+export type { GuardArgs, SignedIn };
+export type Member = Membership & { user: NonNullable<SignedIn>["user"] };
 
-export async function getSignedIn(request: Request) {
-  return auth.api.getSession({ headers: request.headers });
+const requestOf = (args: GuardArgs) => (args instanceof Request ? args : args.request);
+
+/** The session and its user, or null. */
+export function getSignedIn(args: GuardArgs) {
+  return lookupOf(args).signedIn();
 }
 
-/** The user's membership: the session's active organisation, else the oldest; a client member's bound client. */
-export async function findMembership(userId: string, activeOrganizationId?: string | null) {
-  const rows = await db
-    .select({
-      memberId: schema.member.id,
-      role: schema.member.role,
-      organizationId: schema.organization.id,
-      organizationName: schema.organization.name,
-      clientId: schema.clientMember.clientId,
-    })
-    .from(schema.member)
-    .innerJoin(schema.organization, eq(schema.organization.id, schema.member.organizationId))
-    .leftJoin(schema.clientMember, eq(schema.clientMember.memberId, schema.member.id))
-    .where(eq(schema.member.userId, userId))
-    .orderBy(asc(schema.member.createdAt));
-  const row = rows.find((r) => r.organizationId === activeOrganizationId) ?? rows[0];
-  if (!row || !isRole(row.role)) return null;
-  return { ...row, role: row.role as Role };
+/** The signed-in user's membership (the session's active organisation, else the oldest), or null. */
+export function getMembership(args: GuardArgs) {
+  return lookupOf(args).membership();
 }
 
 function signInRedirect(request: Request) {
@@ -42,10 +33,11 @@ function signInRedirect(request: Request) {
 }
 
 /** Page guard: redirects to sign-in without a session, to /welcome without an organisation, 403 for other roles. */
-export async function requireMember(request: Request, options: { roles?: readonly Role[] } = {}): Promise<Member> {
-  const signedIn = await getSignedIn(request);
-  if (!signedIn) throw signInRedirect(request);
-  const membership = await findMembership(signedIn.user.id, signedIn.session.activeOrganizationId);
+export async function requireMember(args: GuardArgs, options: { roles?: readonly Role[] } = {}): Promise<Member> {
+  const lookup = lookupOf(args);
+  const signedIn = await lookup.signedIn();
+  if (!signedIn) throw signInRedirect(requestOf(args));
+  const membership = await lookup.membership();
   if (!membership) throw redirect("/welcome");
   if (options.roles && !options.roles.includes(membership.role)) {
     throw data({ message: "Your role does not give access to this page." }, { status: 403 });
@@ -54,21 +46,32 @@ export async function requireMember(request: Request, options: { roles?: readonl
 }
 
 /** Page guard for signed-in users who may not have an organisation yet. */
-export async function requireUser(request: Request) {
-  const signedIn = await getSignedIn(request);
-  if (!signedIn) throw signInRedirect(request);
+export async function requireUser(args: GuardArgs) {
+  const signedIn = await lookupOf(args).signedIn();
+  if (!signedIn) throw signInRedirect(requestOf(args));
   return signedIn;
 }
 
-/** API guard: a bearer token or a session; JSON 401 / 403 instead of redirects. */
-export async function requireApiMember(request: Request, options: { roles?: readonly Role[] } = {}): Promise<Member> {
-  const authorization = request.headers.get("authorization");
-  const signedIn = authorization ? await signedInByToken(authorization) : await getSignedIn(request);
-  if (!signedIn) throw apiError(401, authorization ? "That API token is not valid: it may have been revoked." : "Sign in first, or send an API token (Authorization: Bearer …).");
-  const membership = await findMembership(signedIn.user.id, signedIn.session.activeOrganizationId);
+/** API guard: a bearer token or a session; JSON 401 / 403 (`{ error: { message } }`) instead of redirects. */
+export async function requireApiMember(args: GuardArgs, options: { roles?: readonly Role[] } = {}): Promise<Member> {
+  const authorization = requestOf(args).headers.get("authorization");
+  let user: NonNullable<SignedIn>["user"];
+  let membership: Membership | null;
+  if (authorization) {
+    const byToken = await signedInByToken(authorization);
+    if (!byToken) throw apiError(401, "That API token is not valid: it may have been revoked.");
+    user = byToken.user;
+    membership = await findMembership(byToken.user.id, byToken.organizationId);
+  } else {
+    const lookup = lookupOf(args);
+    const signedIn = await lookup.signedIn();
+    if (!signedIn) throw apiError(401, "Sign in first, or send an API token (Authorization: Bearer …).");
+    user = signedIn.user;
+    membership = await lookup.membership();
+  }
   if (!membership) throw apiError(403, "You belong to no organisation.");
   if (options.roles && !options.roles.includes(membership.role)) throw apiError(403, "Your role does not allow this.");
-  return { ...membership, user: signedIn.user };
+  return { ...membership, user };
 }
 
 /** A token stands for its member in its organisation, with the member's current role. */
@@ -76,5 +79,5 @@ async function signedInByToken(authorization: string) {
   const token = await resolveToken(authorization);
   if (!token) return null;
   const [user] = await db.select().from(schema.user).where(eq(schema.user.id, token.userId));
-  return user ? { user, session: { activeOrganizationId: token.organizationId } } : null;
+  return user ? { user, organizationId: token.organizationId } : null;
 }

@@ -18,14 +18,10 @@ export async function listMembers(organizationId: string) {
 
 /** Member and waiting-invitation counts for the overview. */
 export async function teamCounts(organizationId: string) {
-  const [members, pending] = await Promise.all([
-    db.select({ n: sql<number>`count(*)::int` }).from(member).where(eq(member.organizationId, organizationId)),
-    db
-      .select({ n: sql<number>`count(*)::int` })
-      .from(invitation)
-      .where(and(eq(invitation.organizationId, organizationId), eq(invitation.status, "pending"), gt(invitation.expiresAt, new Date()))),
-  ]);
-  return { members: members[0]?.n ?? 0, pending: pending[0]?.n ?? 0 };
+  // One round trip: the waiting invitations are counted in a subquery.
+  const pending = db.$count(invitation, and(eq(invitation.organizationId, organizationId), eq(invitation.status, "pending"), gt(invitation.expiresAt, new Date())));
+  const [row] = await db.select({ members: sql<number>`count(*)::int`, pending }).from(member).where(eq(member.organizationId, organizationId));
+  return { members: row?.members ?? 0, pending: row?.pending ?? 0 };
 }
 
 async function ownerCount(tx: Tx, organizationId: string) {

@@ -9,6 +9,7 @@ import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
 import { Card, PageHeader } from "~/components/panels";
 import { inputProps } from "~/lib/conform";
+import { parseForm, readFormData } from "~/lib/form.server";
 import { changePasswordSchema, switchOrganizationSchema } from "~/features/auth/schemas";
 import { redirectWithFlash, withFlash } from "~/infra/flash.server";
 import { requireMember } from "~/features/auth/guard.server";
@@ -17,17 +18,17 @@ import type { Route } from "./+types/account";
 
 export const meta: Route.MetaFunction = () => [{ title: "Account · Isotrope" }];
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const me = await requireMember(request);
+export async function loader(args: Route.LoaderArgs) {
+  const me = await requireMember(args);
   const others = (await membershipsOf(me.user.id)).filter((m) => m.organizationId !== me.organizationId);
   return { name: me.user.name, email: me.user.email, role: me.role, organizationName: me.organizationName, others };
 }
 
-export async function action({ request }: Route.ActionArgs) {
-  const me = await requireMember(request);
-  const formData = await request.formData();
+export async function action({ request, context }: Route.ActionArgs) {
+  const me = await requireMember({ request, context });
+  const formData = await readFormData(request);
   if (formData.get("intent") === "switch-organization") {
-    const submission = parseWithZod(formData, { schema: switchOrganizationSchema });
+    const submission = await parseForm(formData, switchOrganizationSchema);
     if (submission.status !== "success") return data(submission.reply(), { status: 400 });
     try {
       const name = await switchOrganization(me.user.id, submission.value.organizationId);
@@ -36,7 +37,7 @@ export async function action({ request }: Route.ActionArgs) {
       return domainErrorReply(error, submission);
     }
   }
-  const submission = parseWithZod(formData, { schema: changePasswordSchema });
+  const submission = await parseForm(formData, changePasswordSchema);
   const hide = { hideFields: ["current", "password", "confirm"] };
   if (submission.status !== "success") return data(submission.reply(hide), { status: 400 });
   const result = await callAuth(request, "/change-password", {

@@ -1,5 +1,6 @@
 import { getFormProps, useForm } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/form.server";
 import { data, Form } from "react-router";
 import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
@@ -21,7 +22,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 
 // Resend: the same answer for any address (confirmed, unknown or waiting), throttled per address.
 export async function action({ request }: Route.ActionArgs) {
-  const submission = parseWithZod(await request.formData(), { schema: resendSchema });
+  const submission = await parseForm(request, resendSchema);
   if (submission.status !== "success") return data(submission.reply(), { status: 400 });
   const email = (await pendingAddress(request)) ?? submission.value.email;
   if (!email) return data(submission.reply({ fieldErrors: { email: ["Enter the address you signed up with."] } }), { status: 400 });

@@ -7,6 +7,7 @@ import { authMessage } from "~/features/auth/auth-messages";
 import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
 import { inputProps } from "~/lib/conform";
+import { parseForm } from "~/lib/form.server";
 import { forgotSchema } from "~/features/auth/schemas";
 import { redirectWithFlash } from "~/infra/flash.server";
 import type { Route } from "./+types/forgot-password";
@@ -14,7 +15,7 @@ import type { Route } from "./+types/forgot-password";
 export const meta: Route.MetaFunction = () => [{ title: "Reset your password · Isotrope" }];
 
 export async function action({ request }: Route.ActionArgs) {
-  const submission = parseWithZod(await request.formData(), { schema: forgotSchema });
+  const submission = await parseForm(request, forgotSchema);
   if (submission.status !== "success") return data(submission.reply(), { status: 400 });
   const result = await callAuth(request, "/request-password-reset", { email: submission.value.email, redirectTo: "/reset-password" });
   if (result.status === 429) return data(submission.reply({ formErrors: [authMessage(result)] }), { status: 429 });

@@ -5,6 +5,7 @@ import { callAuth, cookiesOf } from "~/features/auth/call.server";
 import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
 import { inputProps } from "~/lib/conform";
+import { parseForm } from "~/lib/form.server";
 import { acceptSchema } from "~/features/auth/schemas";
 import { redirectWithFlash } from "~/infra/flash.server";
 import { acceptAsNewUser, acceptAsUser, findInvitation } from "~/features/members/invitations.server";
@@ -54,7 +55,7 @@ export async function action({ request, params }: Route.ActionArgs) {
       await acceptAsUser(invitation.id, signedIn.user.id, signedIn.user.email);
       return redirectWithFlash("/", { kind: "success", message: `Welcome to ${invitation.organizationName}.` });
     }
-    const submission = parseWithZod(await request.formData(), { schema: acceptSchema });
+    const submission = await parseForm(request, acceptSchema);
     if (submission.status !== "success") return data(submission.reply({ hideFields: ["password", "confirm"] }), { status: 400 });
     await acceptAsNewUser(invitation.id, invitation.email, submission.value.name, submission.value.password);
     const result = await callAuth(request, "/sign-in/email", { email: invitation.email, password: submission.value.password });

@@ -6,6 +6,7 @@ import { callAuth } from "~/features/auth/call.server";
 import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
 import { inputProps } from "~/lib/conform";
+import { parseForm } from "~/lib/form.server";
 import { resetSchema } from "~/features/auth/schemas";
 import { redirectWithFlash } from "~/infra/flash.server";
 import { authMessage } from "~/features/auth/auth-messages";
@@ -25,7 +26,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 }
 
 export async function action({ request }: Route.ActionArgs) {
-  const submission = parseWithZod(await request.formData(), { schema: resetSchema });
+  const submission = await parseForm(request, resetSchema);
   if (submission.status !== "success") return data(submission.reply({ hideFields: ["password", "confirm"] }), { status: 400 });
   const result = await callAuth(request, "/reset-password", { newPassword: submission.value.password, token: submission.value.token });
   if (!result.ok) {

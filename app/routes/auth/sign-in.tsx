@@ -6,6 +6,7 @@ import { authMessage } from "~/features/auth/auth-messages";
 import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
 import { inputProps } from "~/lib/conform";
+import { parseForm } from "~/lib/form.server";
 import { safeRedirect, signInSchema } from "~/features/auth/schemas";
 import { getSignedIn } from "~/features/auth/guard.server";
 import type { Route } from "./+types/sign-in";
@@ -18,7 +19,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 }
 
 export async function action({ request }: Route.ActionArgs) {
-  const submission = parseWithZod(await request.formData(), { schema: signInSchema });
+  const submission = await parseForm(request, signInSchema);
   if (submission.status !== "success") return data(submission.reply({ hideFields: ["password"] }), { status: 400 });
   const { email, password, redirectTo } = submission.value;
   const result = await callAuth(request, "/sign-in/email", { email, password, callbackURL: "/verified" });

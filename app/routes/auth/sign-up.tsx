@@ -7,6 +7,7 @@ import { rememberPendingAddress } from "~/features/auth/pending-address.server";
 import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
 import { inputProps } from "~/lib/conform";
+import { parseForm } from "~/lib/form.server";
 import { signUpSchema } from "~/features/auth/schemas";
 import { getSignedIn } from "~/features/auth/guard.server";
 import type { Route } from "./+types/sign-up";
@@ -21,7 +22,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 // A taken address gets exactly the answer a new one gets (better-auth answers alike when
 // e-mail confirmation is required); its owner is told by mail (auth.server.ts).
 export async function action({ request }: Route.ActionArgs) {
-  const submission = parseWithZod(await request.formData(), { schema: signUpSchema });
+  const submission = await parseForm(request, signUpSchema);
   const hide = { hideFields: ["password", "confirm"] };
   if (submission.status !== "success") return data(submission.reply(hide), { status: 400 });
   const { name, email, password } = submission.value;

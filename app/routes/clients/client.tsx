@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm, readFormData } from "~/lib/form.server";
 import { useState } from "react";
 import { data, Form, Link, useSearchParams } from "react-router";
 import { Button, ButtonLink } from "~/components/button";
@@ -20,17 +20,17 @@ import type { Route } from "./+types/client";
 
 export const meta: Route.MetaFunction = ({ data }) => [{ title: data ? `${data.client.name} · Isotrope` : "Client · Isotrope" }];
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const member = await requireMember(request, { roles: staffRoles });
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const member = await requireMember({ request, context }, { roles: staffRoles });
   const scope = scopeOf(member);
   const client = found(await findClient(scope, params.clientId), "No such client in your organisation.");
   const { sites, total } = await listSites(scope, { page: 1, pageSize: 100, q: "", clientId: client.id, sort: "name", dir: "asc" });
   return { client, sites, siteTotal: total, canEdit: canEditInventory(member.role) };
 }
 
-export async function action({ request, params }: Route.ActionArgs) {
-  const member = await requireMember(request, { roles: inventoryEditors });
-  const formData = await request.formData();
+export async function action({ request, params, context }: Route.ActionArgs) {
+  const member = await requireMember({ request, context }, { roles: inventoryEditors });
+  const formData = await readFormData(request);
   if (formData.get("intent") === "delete") {
     try {
       await deleteClient(actorOf(member), params.clientId);
@@ -40,7 +40,7 @@ export async function action({ request, params }: Route.ActionArgs) {
     }
     return redirectWithFlash("/clients", { kind: "success", message: "Client deleted." });
   }
-  const submission = parseWithZod(formData, { schema: clientFormSchema });
+  const submission = await parseForm(formData, clientFormSchema);
   if (submission.status !== "success") return data(submission.reply(), { status: 400 });
   const { version, ...fields } = submission.value;
   if (!version) return data(submission.reply({ formErrors: ["The form is missing the version it was opened at. Reload the page."] }), { status: 400 });

@@ -13,8 +13,8 @@ import type { Route } from "./+types/list";
 
 export const meta: Route.MetaFunction = () => [{ title: "Clients · Isotrope" }];
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const member = await requireMember(request, { roles: staffRoles });
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const member = await requireMember({ request, context }, { roles: staffRoles });
   const params = new URL(request.url).searchParams;
   const paging = readPaging(params);
   const { sort, dir } = readSort(params, clientSortKeys, "name");

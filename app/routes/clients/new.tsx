@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/form.server";
 import { data } from "react-router";
 import { PageHeader } from "~/components/panels";
 import { requireMember } from "~/features/auth/guard.server";
@@ -13,14 +13,14 @@ import type { Route } from "./+types/new";
 
 export const meta: Route.MetaFunction = () => [{ title: "New client · Isotrope" }];
 
-export async function loader({ request }: Route.LoaderArgs) {
-  await requireMember(request, { roles: inventoryEditors });
+export async function loader({ request, context }: Route.LoaderArgs) {
+  await requireMember({ request, context }, { roles: inventoryEditors });
   return null;
 }
 
-export async function action({ request }: Route.ActionArgs) {
-  const member = await requireMember(request, { roles: inventoryEditors });
-  const submission = parseWithZod(await request.formData(), { schema: clientFormSchema });
+export async function action({ request, context }: Route.ActionArgs) {
+  const member = await requireMember({ request, context }, { roles: inventoryEditors });
+  const submission = await parseForm(request, clientFormSchema);
   if (submission.status !== "success") return data(submission.reply(), { status: 400 });
   const { version: _v, ...input } = submission.value;
   try {

@@ -5,8 +5,8 @@ import { notFound } from "~/lib/responses.server";
 import { staffRoles } from "~/lib/roles";
 import type { Route } from "./+types/file";
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const member = await requireMember(request, { roles: staffRoles });
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const member = await requireMember({ request, context }, { roles: staffRoles });
   const file = await getFile(member.organizationId, params.fileId);
   if (!file) throw notFound("No such file.");
   const etag = `"${file.sha256}"`;

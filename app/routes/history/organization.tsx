@@ -28,8 +28,8 @@ function dateParam(value: string | null, endOfDay = false) {
   return endOfDay ? new Date(date.getTime() + 86_400_000) : date;
 }
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const member = await requireMember(request, { roles: ["owner"] });
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const member = await requireMember({ request, context }, { roles: ["owner"] });
   const params = new URL(request.url).searchParams;
   const { page, pageSize } = readPaging(params, 50);
   const entity = entities.some(([k]) => k === params.get("entity")) ? params.get("entity") : null;

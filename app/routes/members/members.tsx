@@ -9,6 +9,7 @@ import { Field, FormErrors, SelectField } from "~/components/field";
 import { Card, EmptyState, PageHeader } from "~/components/panels";
 import { TableShell } from "~/components/table-shell";
 import { inputProps } from "~/lib/conform";
+import { parseForm } from "~/lib/form.server";
 import { inviteSchema, memberActionSchema } from "~/features/members/schemas";
 import { redirectWithFlash } from "~/infra/flash.server";
 import { cancelInvitation, inviteMember, listPendingInvitations } from "~/features/members/invitations.server";
@@ -22,15 +23,15 @@ export const meta: Route.MetaFunction = () => [{ title: "Members · Isotrope" }]
 
 const roleOptions = roles.map((r) => ({ value: r, label: roleLabels[r] }));
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const me = await requireMember(request, { roles: ["owner"] });
+export async function loader(args: Route.LoaderArgs) {
+  const me = await requireMember(args, { roles: ["owner"] });
   const [members, invitations] = await Promise.all([listMembers(me.organizationId), listPendingInvitations(me.organizationId)]);
   return { members, invitations, myUserId: me.user.id };
 }
 
-export async function action({ request }: Route.ActionArgs) {
-  const me = await requireMember(request, { roles: ["owner"] });
-  const submission = parseWithZod(await request.formData(), { schema: memberActionSchema });
+export async function action({ request, context }: Route.ActionArgs) {
+  const me = await requireMember({ request, context }, { roles: ["owner"] });
+  const submission = await parseForm(request, memberActionSchema);
   if (submission.status !== "success") return data(submission.reply(), { status: 400 });
   const actor = { organizationId: me.organizationId, userId: me.user.id };
   const value = submission.value;

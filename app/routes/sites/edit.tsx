@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/form.server";
 import { data } from "react-router";
 import { requireMember } from "~/features/auth/guard.server";
 import { clientOptions } from "~/features/clients/clients.server";
@@ -12,16 +12,16 @@ import { found } from "~/lib/responses.server";
 import { inventoryEditors } from "~/lib/roles";
 import type { Route } from "./+types/edit";
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const member = await requireMember(request, { roles: inventoryEditors });
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const member = await requireMember({ request, context }, { roles: inventoryEditors });
   const scope = scopeOf(member);
   const site = found(await findSite(scope, params.siteId), "No such site in your organisation.");
   return { site, clients: await clientOptions(scope) };
 }
 
-export async function action({ request, params }: Route.ActionArgs) {
-  const member = await requireMember(request, { roles: inventoryEditors });
-  const submission = parseWithZod(await request.formData(), { schema: siteFormSchema });
+export async function action({ request, params, context }: Route.ActionArgs) {
+  const member = await requireMember({ request, context }, { roles: inventoryEditors });
+  const submission = await parseForm(request, siteFormSchema);
   if (submission.status !== "success") return data(submission.reply(), { status: 400 });
   const { version, ...fields } = submission.value;
   if (!version) return data(submission.reply({ formErrors: ["The form is missing the version it was opened at. Reload the page."] }), { status: 400 });

@@ -7,8 +7,8 @@ import { found } from "~/lib/responses.server";
 import { staffRoles } from "~/lib/roles";
 import type { Route } from "./+types/history";
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const member = await requireMember(request, { roles: staffRoles });
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const member = await requireMember({ request, context }, { roles: staffRoles });
   const site = found(await findSite(scopeOf(member), params.siteId), "No such site in your organisation.");
   return { events: await siteHistory(member.organizationId, site.id) };
 }

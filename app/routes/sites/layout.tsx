@@ -8,8 +8,8 @@ import { found } from "~/lib/responses.server";
 import { staffRoles } from "~/lib/roles";
 import type { Route } from "./+types/layout";
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const member = await requireMember(request, { roles: staffRoles });
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const member = await requireMember({ request, context }, { roles: staffRoles });
   const site = found(await findSite(scopeOf(member), params.siteId), "No such site in your organisation.");
   const [surfaces, obstructions, accessPoints] = await Promise.all([
     db.select().from(schema.surface).where(eq(schema.surface.siteId, site.id)).orderBy(asc(schema.surface.position)),

@@ -9,8 +9,8 @@ import type { Route } from "./+types/site";
 
 export const meta: Route.MetaFunction = ({ data }) => [{ title: data ? `${data.site.name} · Isotrope` : "Site · Isotrope" }];
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const member = await requireMember(request, { roles: staffRoles });
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const member = await requireMember({ request, context }, { roles: staffRoles });
   const site = found(await findSite(scopeOf(member), params.siteId), "No such site in your organisation.");
   return {
     site: { id: site.id, name: site.name, kind: site.kind as SiteKind, address: site.address, city: site.city, clientId: site.clientId, clientName: site.clientName, datumNote: site.datumNote, accessNotes: site.accessNotes },

@@ -7,8 +7,8 @@ import { apiError } from "~/lib/api.server";
 import { staffRoles } from "~/lib/roles";
 import type { Route } from "./+types/site-history";
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const member = await requireApiMember(request, { roles: staffRoles });
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const member = await requireApiMember({ request, context }, { roles: staffRoles });
   const site = await findSite(scopeOf(member), params.siteId);
   if (!site) return apiError(404, "No such site.");
   const events = await siteHistory(member.organizationId, site.id, 1000);

@@ -9,16 +9,16 @@ import { api, apiError, methodNotAllowed, readJson } from "~/lib/api.server";
 import { inventoryEditors, staffRoles } from "~/lib/roles";
 import type { Route } from "./+types/site";
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const member = await requireApiMember(request, { roles: staffRoles });
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const member = await requireApiMember({ request, context }, { roles: staffRoles });
   const site = await siteDetail(scopeOf(member), params.siteId);
   if (!site) return apiError(404, "No such site.");
   return Response.json({ site });
 }
 
-export async function action({ request, params }: Route.ActionArgs) {
+export async function action({ request, params, context }: Route.ActionArgs) {
   if (request.method !== "PATCH" && request.method !== "DELETE") return methodNotAllowed("GET, PATCH, DELETE");
-  const member = await requireApiMember(request, { roles: inventoryEditors });
+  const member = await requireApiMember({ request, context }, { roles: inventoryEditors });
   return api(async () => {
     if (request.method === "DELETE") {
       await deleteSite(actorOf(member), params.siteId);

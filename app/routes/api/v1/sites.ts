@@ -10,8 +10,8 @@ import { readPaging, readSort } from "~/lib/paging";
 import { inventoryEditors, staffRoles } from "~/lib/roles";
 import type { Route } from "./+types/sites";
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const member = await requireApiMember(request, { roles: staffRoles });
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const member = await requireApiMember({ request, context }, { roles: staffRoles });
   const params = new URL(request.url).searchParams;
   const paging = readPaging(params);
   const { sort, dir } = readSort(params, siteSortKeys, "name");
@@ -31,9 +31,9 @@ export async function loader({ request }: Route.LoaderArgs) {
   });
 }
 
-export async function action({ request }: Route.ActionArgs) {
+export async function action({ request, context }: Route.ActionArgs) {
   if (request.method !== "POST") return methodNotAllowed("GET, POST");
-  const member = await requireApiMember(request, { roles: inventoryEditors });
+  const member = await requireApiMember({ request, context }, { roles: inventoryEditors });
   return api(async () => {
     const input = await readJson(request, siteCreateSchema);
     const site = await createSite(actorOf(member), input);

@@ -8,9 +8,9 @@ export async function loader() {
   return methodNotAllowed("DELETE");
 }
 
-export async function action({ request, params }: Route.ActionArgs) {
+export async function action({ request, params, context }: Route.ActionArgs) {
   if (request.method !== "DELETE") return methodNotAllowed("DELETE");
-  const member = await requireApiMember(request);
+  const member = await requireApiMember({ request, context });
   return api(async () => {
     await revokeToken({ organizationId: member.organizationId, userId: member.user.id, memberId: member.memberId }, params.tokenId);
     return new Response(null, { status: 204 });

@@ -5,16 +5,16 @@ import { createToken, listTokens } from "~/features/auth/tokens.server";
 import { api, apiError, methodNotAllowed, readJson } from "~/lib/api.server";
 import type { Route } from "./+types/tokens";
 
-export async function loader({ request }: Route.LoaderArgs) {
-  const member = await requireApiMember(request);
+export async function loader({ request, context }: Route.LoaderArgs) {
+  const member = await requireApiMember({ request, context });
   const tokens = await listTokens(member.memberId);
   return Response.json({ tokens: tokens.map((t) => ({ ...t, createdAt: t.createdAt.toISOString(), lastUsedAt: t.lastUsedAt?.toISOString() ?? null })) });
 }
 
-export async function action({ request }: Route.ActionArgs) {
+export async function action({ request, context }: Route.ActionArgs) {
   if (request.method !== "POST") return methodNotAllowed("GET, POST");
   if (request.headers.get("authorization")) return apiError(403, "Create API tokens while signed in, not with another token.");
-  const member = await requireApiMember(request);
+  const member = await requireApiMember({ request, context });
   return api(async () => {
     const { name } = await readJson(request, tokenCreateSchema);
     const created = await createToken({ organizationId: member.organizationId, userId: member.user.id, memberId: member.memberId }, name);

@@ -1,0 +1,26 @@
+// The Content-Security-Policy of the app's HTML pages, in one place. Scripts run only from this
+// origin or with the per-request nonce React Router puts on its inline hydration scripts.
+// Non-HTML answers get the server's stricter default (server/security-headers.mjs).
+// Later work extends the directives here: worker-src 'self' blob: for the exposure worker, and so on.
+import { randomBytes } from "node:crypto";
+
+export const createNonce = () => randomBytes(16).toString("base64");
+
+export function contentSecurityPolicy(nonce: string, { dev = false } = {}) {
+  const directives: Record<string, string[]> = {
+    "default-src": ["'self'"],
+    "script-src": ["'self'", `'nonce-${nonce}'`],
+    // Development only: Vite injects each module's CSS as a <style> element.
+    "style-src": dev ? ["'self'", "'unsafe-inline'"] : ["'self'"],
+    "img-src": ["'self'", "data:", "blob:"],
+    "font-src": ["'self'"],
+    "connect-src": ["'self'"],
+    "frame-ancestors": ["'none'"],
+    "base-uri": ["'none'"],
+    "form-action": ["'self'"],
+    "object-src": ["'none'"],
+  };
+  return Object.entries(directives)
+    .map(([name, values]) => `${name} ${values.join(" ")}`)
+    .join("; ");
+}
