@@ -15,6 +15,8 @@ export default [
     route("welcome", "routes/welcome.tsx"),
     route("members", "routes/members/members.tsx"),
     route("account", "routes/account/account.tsx"),
+    // Unknown addresses: the 404 inside the shell, with navigation when signed in.
+    route("*", "routes/not-found.tsx"),
   ]),
   route("sign-out", "routes/auth/sign-out.ts"),
   ...prefix("api", [
@@ -22,5 +24,4 @@ export default [
     route("health", "routes/api/health.ts"),
     route("v1/me", "routes/api/v1/me.ts"),
   ]),
-  route("*", "routes/not-found.tsx"),
 ] satisfies RouteConfig;

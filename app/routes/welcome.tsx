@@ -47,7 +47,7 @@ export default function Welcome({ loaderData, actionData }: Route.ComponentProps
           <ul className="space-y-2 text-sm">
             {loaderData.invitations.map((i) => (
               <li key={i.id}>
-                <Link className="text-field-600 underline" to={`/invite/${i.id}`}>
+                <Link className="link" to={`/invite/${i.id}`}>
                   Join {i.organizationName} as {i.role}
                 </Link>
               </li>
@@ -57,7 +57,7 @@ export default function Welcome({ loaderData, actionData }: Route.ComponentProps
       ) : null}
       <div className="mt-5">
         <Card title="Start a new consultancy">
-          <Form method="post" {...getFormProps(form)} className="space-y-4">
+          <Form method="post" {...getFormProps(form)} className="space-y-2">
             <FormErrors errors={form.errors} />
             <Field label="Consultancy name" {...inputProps(fields.name, "text")} />
             <Button>Create the organisation</Button>

@@ -108,6 +108,26 @@ for (const viewport of widths) {
       }
     });
 
+    test("a header link's focus ring is drawn inside the navigation strip", async ({ browser }, info) => {
+      const page = await signedInPage(browser, viewport, "owner@demo.isotrope.test");
+      const link = page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Account" });
+      for (let i = 0; i < 12 && !(await link.evaluate((el) => el === document.activeElement)); i++) await page.keyboard.press("Tab");
+      await expect(link).toBeFocused();
+      const { ring, strip, width } = await link.evaluate((el) => {
+        const style = getComputedStyle(el);
+        const grow = parseFloat(style.outlineOffset) + parseFloat(style.outlineWidth);
+        const r = el.getBoundingClientRect();
+        const n = el.closest("nav")!.getBoundingClientRect();
+        return { ring: { top: r.top - grow, bottom: r.bottom + grow }, strip: { top: n.top, bottom: n.bottom }, width: parseFloat(style.outlineWidth) };
+      });
+      expect(width).toBeGreaterThanOrEqual(2);
+      expect(ring.top).toBeGreaterThanOrEqual(strip.top);
+      expect(ring.bottom).toBeLessThanOrEqual(strip.bottom);
+      const path = info.outputPath(`${viewport.width}-header-focus.png`);
+      await page.screenshot({ path, clip: { x: 0, y: 0, width: viewport.width, height: 140 } });
+      await info.attach("header-focus", { path, contentType: "image/png" });
+    });
+
     test("the members page and an invitation", async ({ browser }, info) => {
       const owner = await signedInPage(browser, viewport, "owner@demo.isotrope.test");
       const email = unique(`invited.${viewport.width}`);
@@ -118,6 +138,12 @@ for (const viewport of widths) {
       await owner.getByRole("button", { name: "Send invitation" }).click();
       await expect(owner.getByText(`Invitation sent to ${email}`)).toBeVisible();
       await look(owner, info, "members");
+      // Every member's controls are on screen, without scrolling sideways.
+      const row = owner.getByRole("row").filter({ hasText: "engineer@demo.isotrope.test" });
+      for (const control of [row.getByLabel(/Role of/), row.getByRole("button", { name: "Save" }), row.getByRole("button", { name: "Remove" })]) {
+        const box = (await control.boundingBox())!;
+        expect(box.x + box.width).toBeLessThanOrEqual(viewport.width);
+      }
       const invitee = await (await browser.newContext({ viewport })).newPage();
       await visit(invitee, linkIn(await latestMail(email, /Join /, start)));
       await look(invitee, info, "invite");

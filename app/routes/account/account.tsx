@@ -47,24 +47,28 @@ export default function Account({ loaderData, actionData }: Route.ComponentProps
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
   });
+  const details = [
+    ["Name", name],
+    ["E-mail", email],
+    ["Organisation", organizationName],
+    ["Role", roleLabels[role]],
+  ] as const;
   return (
     <>
       <PageHeader title="Account">Your own details. Your organisation's owner sets roles.</PageHeader>
       <div className="grid gap-6 md:grid-cols-2">
         <Card title="You">
-          <dl className="grid grid-cols-[8rem_1fr] gap-y-2 text-sm">
-            <dt className="text-ink-600">Name</dt>
-            <dd>{name}</dd>
-            <dt className="text-ink-600">E-mail</dt>
-            <dd>{email}</dd>
-            <dt className="text-ink-600">Organisation</dt>
-            <dd>{organizationName}</dd>
-            <dt className="text-ink-600">Role</dt>
-            <dd>{roleLabels[role]}</dd>
+          <dl className="grid gap-x-4 gap-y-1 sm:grid-cols-[8rem_minmax(0,1fr)] sm:gap-y-3">
+            {details.map(([label, value]) => (
+              <div key={label} className="contents">
+                <dt className="label-caps sm:pt-1">{label}</dt>
+                <dd className="mb-2 [overflow-wrap:anywhere] sm:mb-0">{value}</dd>
+              </div>
+            ))}
           </dl>
         </Card>
         <Card title="Change password">
-          <Form method="post" {...getFormProps(form)} className="space-y-4">
+          <Form method="post" {...getFormProps(form)} className="space-y-2">
             <FormErrors errors={form.errors} />
             <Field label="Current password" autoComplete="current-password" {...inputProps(fields.current, "password")} />
             <Field label="New password" autoComplete="new-password" hint="At least 10 characters, letters mixed with digits or symbols." {...inputProps(fields.password, "password")} />

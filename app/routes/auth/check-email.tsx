@@ -10,7 +10,7 @@ export default function CheckEmail() {
   return (
     <>
       <h1 className="mb-2 text-xl font-semibold">Check your e-mail</h1>
-      <p className="text-sm text-ink-600">
+      <p className="text-sm text-graphite-600">
         We sent a confirmation link to {email ? <strong className="text-ink-900">{email}</strong> : "your address"}. Follow it within
         the hour to finish signing up.
       </p>

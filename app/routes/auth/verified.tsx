@@ -21,7 +21,7 @@ export default function Verified({ loaderData }: Route.ComponentProps) {
   return (
     <>
       <h1 className="mb-2 text-xl font-semibold">{problem ? "Link not accepted" : "E-mail confirmed"}</h1>
-      <p className="text-sm text-ink-600" role={problem ? "alert" : undefined}>
+      <p className="text-sm text-graphite-600" role={problem ? "alert" : undefined}>
         {problem ?? "Thank you. Your address is confirmed and you are signed in."}
       </p>
       <FooterLink to={problem ? "/sign-in" : "/"}>{problem ? "Go to sign-in" : "Continue to Isotrope"}</FooterLink>

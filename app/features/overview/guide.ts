@@ -1,0 +1,61 @@
+// What the overview tells each role: what it can do in the portal today and the one next step.
+// Only what is built is named here; nothing is promised.
+import type { Role } from "~/lib/roles";
+
+export type Team = { members: number; pending: number };
+export type NextStep = { title: string; text: string; to: string; action: string };
+export type Guide = { now: string[]; next: NextStep };
+
+const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
+
+function ownerNext(team: Team): NextStep {
+  if (team.pending > 0) {
+    return {
+      title: `${plural(team.pending, "invitation", "invitations")} waiting`,
+      text: "An invitation lasts 7 days. Send one again from Members if it has lapsed or gone astray.",
+      to: "/members",
+      action: "Open Members",
+    };
+  }
+  if (team.members <= 1) {
+    return {
+      title: "Invite your first colleague",
+      text: "Nobody else belongs to the organisation yet. Invite them by e-mail and choose their role.",
+      to: "/members",
+      action: "Invite someone",
+    };
+  }
+  return {
+    title: "Keep the team up to date",
+    text: "Check that everyone who signs in still needs to, and in the right role.",
+    to: "/members",
+    action: "Open Members",
+  };
+}
+
+const accountNext: NextStep = {
+  title: "Check your account",
+  text: "Make sure your name and e-mail are right, and choose a password of your own if you were given one.",
+  to: "/account",
+  action: "Open Account",
+};
+
+const memberNow = [
+  "See your organisation and the role its owner gave you.",
+  "Change your password from Account; other devices are signed out when you do.",
+  "Nothing else in the portal is open to your role at present. Your organisation's owner can tell you more.",
+];
+
+export function guideFor(role: Role, team: Team | null): Guide {
+  if (role === "owner") {
+    return {
+      now: [
+        "Invite colleagues by e-mail and choose each one's role.",
+        "Change a member's role or remove them; withdraw an invitation or send it again.",
+        "Change your own password from Account.",
+      ],
+      next: ownerNext(team ?? { members: 1, pending: 0 }),
+    };
+  }
+  return { now: memberNow, next: accountNext };
+}
