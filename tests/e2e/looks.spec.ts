@@ -33,12 +33,17 @@ async function signedInPage(browser: Browser, viewport: { width: number; height:
 for (const viewport of widths) {
   test.describe(`at ${viewport.width} px`, () => {
     test.use({ viewport });
+    // Every page runs axe; on a loaded machine that takes a while.
+    test.describe.configure({ timeout: 240_000 });
 
     test("signed-out pages", async ({ page }, info) => {
       await visit(page, "/sign-in");
       await look(page, info, "sign-in");
       await visit(page, "/sign-up");
       await look(page, info, "sign-up");
+      await page.getByRole("button", { name: "Create account" }).click();
+      await expect(page.getByLabel("E-mail")).toHaveAttribute("aria-invalid", "true");
+      await look(page, info, "sign-up-errors");
       await visit(page, "/forgot-password");
       await look(page, info, "forgot-password");
       await visit(page, `/check-email?email=${encodeURIComponent("a.very.long.address.for.a.surveyor@field-office.example.test")}`);
@@ -91,7 +96,7 @@ for (const viewport of widths) {
     });
 
     test("each role's overview, the account page and the 404 signed in", async ({ browser }, info) => {
-      test.setTimeout(180_000);
+      test.setTimeout(360_000);
       for (const role of ["owner", "engineer", "reviewer", "billing", "client", "regulator"]) {
         const page = await signedInPage(browser, viewport, `${role}@demo.isotrope.test`);
         await look(page, info, `overview-${role}`);
@@ -144,6 +149,13 @@ for (const viewport of widths) {
         const box = (await control.boundingBox())!;
         expect(box.x + box.width).toBeLessThanOrEqual(viewport.width);
       }
+      await row.getByRole("button", { name: "Remove" }).click();
+      await expect(owner.getByRole("dialog")).toBeVisible();
+      const path = info.outputPath(`${viewport.width}-members-remove-dialog.png`);
+      await owner.screenshot({ path });
+      await info.attach("members-remove-dialog", { path, contentType: "image/png" });
+      await owner.getByRole("dialog").getByRole("button", { name: "Keep" }).click();
+      await expect(owner.getByRole("dialog")).toBeHidden();
       const invitee = await (await browser.newContext({ viewport })).newPage();
       await visit(invitee, linkIn(await latestMail(email, /Join /, start)));
       await look(invitee, info, "invite");
