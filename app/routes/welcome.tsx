@@ -8,6 +8,7 @@ import { inputProps } from "~/lib/conform";
 import { organizationSchema } from "~/features/members/schemas";
 import { redirectWithFlash } from "~/infra/flash.server";
 import { invitationsFor } from "~/features/members/invitations.server";
+import { invitationRoleLabel } from "~/features/members/invitation-list";
 import { createOrganization } from "~/features/members/organizations.server";
 import { domainErrorReply } from "~/lib/domain-error";
 import { findMembership, requireUser } from "~/features/auth/guard.server";
@@ -48,7 +49,7 @@ export default function Welcome({ loaderData, actionData }: Route.ComponentProps
             {loaderData.invitations.map((i) => (
               <li key={i.id}>
                 <Link className="link" to={`/invite/${i.id}`}>
-                  Join {i.organizationName} as {i.role}
+                  Join {i.organizationName} as {invitationRoleLabel(i.role)}
                 </Link>
               </li>
             ))}

@@ -7,7 +7,8 @@ import { isRole, roleLabels } from "~/lib/roles";
 
 export type InvitationRow = { id: string; email: string; role: string; expiresAt: Date | string };
 
-const label = (role: string) => (isRole(role) ? roleLabels[role] : role);
+/** A stored role as people read it; an unknown value is shown as stored. */
+export const invitationRoleLabel = (role: string) => (isRole(role) ? roleLabels[role] : role);
 
 export function InvitationList({ invitations }: { invitations: InvitationRow[] }) {
   if (invitations.length === 0) return <EmptyState title="None waiting." />;
@@ -18,7 +19,7 @@ export function InvitationList({ invitations }: { invitations: InvitationRow[] }
           <span className="min-w-0">
             <span className="block font-medium [overflow-wrap:anywhere]">{i.email}</span>
             <span className="block text-sm text-graphite-600">
-              {label(i.role)} · until <DateText value={i.expiresAt} />
+              {invitationRoleLabel(i.role)} · until <DateText value={i.expiresAt} />
             </span>
           </span>
           <span className="flex gap-3">
@@ -43,5 +44,3 @@ export function InvitationList({ invitations }: { invitations: InvitationRow[] }
     </ul>
   );
 }
-
-export { label as invitationRoleLabel };

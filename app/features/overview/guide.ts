@@ -35,7 +35,7 @@ function ownerNext(team: Team): NextStep {
 
 const accountNext: NextStep = {
   title: "Check your account",
-  text: "Make sure your name and e-mail are right, and choose a password of your own if you were given one.",
+  text: "Make sure your name and e-mail are right. You can change your password there at any time.",
   to: "/account",
   action: "Open Account",
 };
