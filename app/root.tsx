@@ -4,6 +4,8 @@ import { useEffect } from "react";
 import { isRouteErrorResponse, Links, Meta, Outlet, Scripts, ScrollRestoration } from "react-router";
 import type { Route } from "./+types/root";
 import { sessionMiddleware } from "~/features/auth/session-context.server";
+import { Wordmark } from "./components/mark";
+import { errorTitle } from "./components/route-error";
 import "./app.css";
 
 /** One session lookup per request, shared by the layout and the page (guard.server.ts). */
@@ -38,21 +40,34 @@ export default function App() {
 }
 
 export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
-  let title = "Something went wrong";
+  let status = 500;
   let detail = "The page could not be shown. Try again, or go back to the overview.";
   if (isRouteErrorResponse(error)) {
-    title = error.status === 404 ? "Page not found" : error.status === 403 ? "Not allowed" : `Error ${error.status}`;
+    status = error.status;
     const message = (error.data as { message?: string } | undefined)?.message;
     detail = message ?? (error.status === 404 ? "There is no page at this address." : error.statusText || detail);
   }
+  const title = errorTitle(status);
   return (
-    <main className="mx-auto max-w-xl px-6 py-24">
-      <p className="text-sm font-medium text-field-600">Isotrope</p>
-      <h1 className="mt-2 text-2xl font-semibold">{title}</h1>
-      <p className="mt-3 text-ink-600">{detail}</p>
-      <a className="mt-6 inline-block text-sm font-medium text-field-600 underline" href="/">
-        Back to the overview
+    <main className="graph-paper flex min-h-screen flex-col items-center px-4 py-16">
+      <title>{`${title} · Isotrope`}</title>
+      <a href="/" className="mb-6 px-1 py-1">
+        <Wordmark size="lg" />
       </a>
+      <div className="w-full max-w-md rounded-sheet border border-ink-900 bg-sheet shadow-[5px_5px_0_var(--color-rule)]">
+        <p className="label-caps border-b border-rule px-6 py-2.5">
+          Status <span className="figures">{status}</span>
+        </p>
+        <div className="p-6">
+          <h1 className="text-2xl font-bold">{title}</h1>
+          <p className="mt-2 text-graphite-600">{detail}</p>
+          <p className="mt-5">
+            <a className="link" href="/">
+              Back to the overview
+            </a>
+          </p>
+        </div>
+      </div>
     </main>
   );
 }

@@ -30,6 +30,8 @@ export default [
       ]),
     ]),
     route("history", "routes/history/organization.tsx"),
+    // Unknown addresses: the 404 inside the shell, with navigation when signed in.
+    route("*", "routes/not-found.tsx"),
   ]),
   route("files/:fileId", "routes/files/file.ts"),
   route("sign-out", "routes/auth/sign-out.ts"),
@@ -44,5 +46,4 @@ export default [
     route("v1/sites/:siteId", "routes/api/v1/site.ts"),
     route("v1/sites/:siteId/history", "routes/api/v1/site-history.ts"),
   ]),
-  route("*", "routes/not-found.tsx"),
 ] satisfies RouteConfig;

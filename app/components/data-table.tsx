@@ -44,10 +44,10 @@ export function DataTable<Row>({ caption, columns, rows, total, page, pageSize, 
   const to = Math.min(total, page * pageSize);
   return (
     <div>
-      <div className="relative overflow-x-auto rounded-card border border-ink-200 bg-white">
-        <table className="min-w-full divide-y divide-ink-200 text-sm">
+      <div className="relative overflow-x-auto rounded-sheet border border-rule bg-white">
+        <table className="min-w-full divide-y divide-rule text-sm">
           <caption className="sr-only">{caption}</caption>
-          <thead className="bg-ink-50">
+          <thead className="bg-paper">
             {table.getHeaderGroups().map((group) => (
               <tr key={group.id}>
                 {group.headers.map((header) => {
@@ -60,7 +60,7 @@ export function DataTable<Row>({ caption, columns, rows, total, page, pageSize, 
                       key={header.id}
                       scope="col"
                       aria-sort={active ? (dir === "asc" ? "ascending" : "descending") : undefined}
-                      className={`px-3 py-2 font-medium text-ink-600 ${right ? "text-right" : "text-left"}`}
+                      className={`px-3 py-2 font-medium text-graphite-600 ${right ? "text-right" : "text-left"}`}
                     >
                       {key ? (
                         <Link
@@ -68,7 +68,7 @@ export function DataTable<Row>({ caption, columns, rows, total, page, pageSize, 
                           className="inline-flex items-center gap-1 hover:text-ink-900"
                         >
                           {label}
-                          <span aria-hidden="true" className={active ? "text-ink-900" : "text-ink-200"}>
+                          <span aria-hidden="true" className={active ? "text-ink-900" : "text-graphite-300"}>
                             {active && dir === "desc" ? "▾" : "▴"}
                           </span>
                         </Link>
@@ -81,11 +81,11 @@ export function DataTable<Row>({ caption, columns, rows, total, page, pageSize, 
               </tr>
             ))}
           </thead>
-          <tbody className="divide-y divide-ink-100">
+          <tbody className="divide-y divide-rule">
             {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className="hover:bg-ink-50/60">
+              <tr key={row.id} className="hover:bg-paper/60">
                 {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className={`px-3 py-2 align-middle text-ink-800 ${cell.column.columnDef.meta?.align === "right" ? "text-right tabular-nums" : ""}`}>
+                  <td key={cell.id} className={`px-3 py-2 align-middle text-ink-700 ${cell.column.columnDef.meta?.align === "right" ? "text-right tabular-nums" : ""}`}>
                     {flexRender(cell.column.columnDef.cell, cell.getContext())}
                   </td>
                 ))}
@@ -93,15 +93,15 @@ export function DataTable<Row>({ caption, columns, rows, total, page, pageSize, 
             ))}
           </tbody>
         </table>
-        {rows.length === 0 ? <div className="px-6 py-10 text-center text-sm text-ink-600">{empty}</div> : null}
+        {rows.length === 0 ? <div className="px-6 py-10 text-center text-sm text-graphite-600">{empty}</div> : null}
       </div>
-      <nav aria-label="Pages" className="mt-3 flex flex-wrap items-center justify-between gap-3 text-sm text-ink-600">
+      <nav aria-label="Pages" className="mt-3 flex flex-wrap items-center justify-between gap-3 text-sm text-graphite-600">
         <span className="tabular-nums">{total === 0 ? "Nothing to show" : `${from}–${to} of ${total}`}</span>
         <span className="flex items-center gap-2">
           <label className="flex items-center gap-1">
             <span>Rows</span>
             <select
-              className="rounded-md border border-ink-200 bg-white px-1.5 py-1"
+              className="rounded-control border border-rule bg-white px-1.5 py-1"
               value={pageSize}
               onChange={(e) => {
                 navigate(withParams(params, { pageSize: e.target.value, page: null }));
@@ -115,7 +115,7 @@ export function DataTable<Row>({ caption, columns, rows, total, page, pageSize, 
             </select>
           </label>
           {page > 1 ? (
-            <Link className="rounded-md px-2 py-1 ring-1 ring-ink-200 hover:bg-ink-50" to={withParams(params, { page: String(page - 1) })}>
+            <Link className="rounded-control px-2 py-1 ring-1 ring-rule hover:bg-paper" to={withParams(params, { page: String(page - 1) })}>
               Previous
             </Link>
           ) : null}
@@ -123,7 +123,7 @@ export function DataTable<Row>({ caption, columns, rows, total, page, pageSize, 
             Page {Math.min(page, pages)} of {pages}
           </span>
           {page < pages ? (
-            <Link className="rounded-md px-2 py-1 ring-1 ring-ink-200 hover:bg-ink-50" to={withParams(params, { page: String(page + 1) })}>
+            <Link className="rounded-control px-2 py-1 ring-1 ring-rule hover:bg-paper" to={withParams(params, { page: String(page + 1) })}>
               Next
             </Link>
           ) : null}

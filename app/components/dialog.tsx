@@ -1,8 +1,9 @@
-import { useEffect, useRef, type ReactNode } from "react";
+import { useEffect, useId, useRef, type ReactNode } from "react";
 
 /** A modal on the native <dialog> element: focus trap, Escape to close. */
 export function Dialog({ open, onClose, title, children }: { open: boolean; onClose: () => void; title: string; children: ReactNode }) {
   const ref = useRef<HTMLDialogElement>(null);
+  const titleId = useId();
   useEffect(() => {
     const dialog = ref.current;
     if (!dialog) return;
@@ -13,15 +14,13 @@ export function Dialog({ open, onClose, title, children }: { open: boolean; onCl
     <dialog
       ref={ref}
       onClose={onClose}
-      aria-labelledby="dialog-title"
-      className="m-auto w-full max-w-md rounded-card border border-ink-200 p-0 shadow-lg backdrop:bg-ink-900/40"
+      aria-labelledby={titleId}
+      className="m-auto w-[calc(100%-2rem)] max-w-md rounded-sheet border border-ink-900 bg-sheet p-0 text-ink-900 shadow-lift backdrop:bg-ink-900/45"
     >
-      <div className="p-5">
-        <h2 id="dialog-title" className="mb-3 text-base font-semibold text-ink-900">
-          {title}
-        </h2>
-        {children}
-      </div>
+      <h2 id={titleId} className="border-b border-rule px-5 py-3 text-lg font-bold [overflow-wrap:anywhere]">
+        {title}
+      </h2>
+      <div className="p-5">{children}</div>
     </dialog>
   );
 }

@@ -11,15 +11,6 @@ export const roleLabels: Record<Role, string> = {
   regulator: "Regulator",
 };
 
-export const roleSummaries: Record<Role, string> = {
-  owner: "Everything in the organisation: you invite members and set their roles.",
-  engineer: "You record clients, sites, emitters, visits and readings, run assessments and draft documents.",
-  reviewer: "Everything an engineer does, plus approving and issuing documents written by someone else.",
-  billing: "You handle invoices, payments, refunds and prices, and can read sites.",
-  client: "You see your own sites' issued letters, maps and certificates.",
-  regulator: "You see the assessments filed to your authority, read-only.",
-};
-
 export function isRole(value: unknown): value is Role {
   return typeof value === "string" && (roles as readonly string[]).includes(value);
 }

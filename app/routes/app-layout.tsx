@@ -1,4 +1,6 @@
 import { data, Form, NavLink, Outlet } from "react-router";
+import { buttonClass, ButtonLink } from "~/components/button";
+import { Wordmark } from "~/components/mark";
 import { FlashMessage } from "~/components/panels";
 import { takeFlash } from "~/infra/flash.server";
 import { getMembership, getSignedIn } from "~/features/auth/guard.server";
@@ -20,48 +22,54 @@ export async function loader(args: Route.LoaderArgs) {
   );
 }
 
+// Links sit inside a scrolling strip on narrow screens, so their focus ring is drawn inside them.
+const navLink = ({ isActive }: { isActive: boolean }) =>
+  `block whitespace-nowrap px-3 py-3 text-sm focus-visible:outline-offset-[-4px] ${
+    isActive ? "font-bold text-ink-900 shadow-[inset_0_-3px_0_var(--color-flag-600)]" : "text-graphite-600 hover:text-ink-900 hover:shadow-[inset_0_-3px_0_var(--color-rule)]"
+  }`;
+
 export default function AppLayout({ loaderData }: Route.ComponentProps) {
   const { person, role, organizationName, flash } = loaderData;
   return (
     <div className="min-h-screen">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:rounded focus:bg-white focus:px-3 focus:py-2">
+      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-10 focus:bg-sheet focus:px-3 focus:py-2">
         Skip to content
       </a>
-      <header className="border-b border-ink-800 bg-ink-900 text-ink-100">
-        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-5 py-3">
-          <NavLink to="/" className="flex items-center gap-2 font-semibold text-white">
-            <img src="/favicon.svg" alt="" className="h-7 w-7" />
-            Isotrope
+      <header className="border-b border-ink-900 bg-sheet">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 px-5">
+          <NavLink to="/" className="-mx-1 my-2 px-1 py-1" aria-label="Isotrope, overview">
+            <Wordmark />
           </NavLink>
-          <nav aria-label="Main" className="order-last -mx-2 flex w-full gap-1 overflow-x-auto sm:order-none sm:mx-0 sm:w-auto sm:flex-1">
-            {(role ? sectionsFor(role) : []).map((s) => (
-              <NavLink
-                key={s.path}
-                to={s.path}
-                end
-                className={({ isActive }) =>
-                  `rounded-md px-3 py-1.5 text-sm ${isActive ? "bg-ink-800 text-white" : "text-ink-200 hover:bg-ink-800 hover:text-white"}`
-                }
-              >
-                {s.label}
-              </NavLink>
-            ))}
+          <nav aria-label="Main" className="order-last -mx-3 w-[calc(100%+1.5rem)] overflow-x-auto border-t border-rule sm:order-none sm:mx-0 sm:w-auto sm:flex-1 sm:border-t-0">
+            <ul className="flex">
+              {(role ? sectionsFor(role) : []).map((s) => (
+                <li key={s.path}>
+                  <NavLink to={s.path} end className={navLink}>
+                    {s.label}
+                  </NavLink>
+                </li>
+              ))}
+            </ul>
           </nav>
-          {person ? (
-            <div className="ml-auto flex items-center gap-3 text-sm">
-              <span className="hidden text-right leading-tight sm:block">
-                <span className="block text-white">{person.name}</span>
-                <span className="block text-xs text-ink-200">
-                  {role ? `${roleLabels[role]} · ${organizationName}` : person.email}
+          <div className="ml-auto flex items-center gap-3 py-2 text-sm">
+            {person ? (
+              <>
+                <span className="hidden max-w-80 text-right leading-tight sm:block">
+                  <span className="block truncate font-medium text-ink-900">{person.name}</span>
+                  <span className="block truncate text-xs text-graphite-600">{role ? `${roleLabels[role]} · ${organizationName}` : person.email}</span>
                 </span>
-              </span>
-              <Form method="post" action="/sign-out">
-                <button type="submit" className="whitespace-nowrap rounded-md px-3 py-1.5 text-ink-200 ring-1 ring-ink-600 hover:bg-ink-800 hover:text-white">
-                  Sign out
-                </button>
-              </Form>
-            </div>
-          ) : null}
+                <Form method="post" action="/sign-out">
+                  <button type="submit" className={buttonClass("secondary", "whitespace-nowrap", "sm")}>
+                    Sign out
+                  </button>
+                </Form>
+              </>
+            ) : (
+              <ButtonLink to="/sign-in" size="sm">
+                Sign in
+              </ButtonLink>
+            )}
+          </div>
         </div>
       </header>
       <main id="main" className="mx-auto max-w-6xl px-5 py-8">

@@ -1,40 +1,62 @@
-import { Card, PageHeader } from "~/components/panels";
-import { RfCautions } from "~/components/cautions";
-import { teamCounts } from "~/features/members/members.server";
-import { requireMember } from "~/features/auth/guard.server";
-import { roleLabels, roleSummaries } from "~/lib/roles";
 import { ButtonLink } from "~/components/button";
+import { RfCautions } from "~/components/cautions";
+import { Card, PageHeader } from "~/components/panels";
+import { TitleBlock } from "~/components/title-block";
+import { requireMember } from "~/features/auth/guard.server";
+import { teamCounts } from "~/features/members/members.server";
+import { guideFor } from "~/features/overview/guide";
+import { roleLabels, staffRoles } from "~/lib/roles";
+import { inventoryCounts } from "~/features/sites/counts.server";
 import type { Route } from "./+types/overview";
 
 export const meta: Route.MetaFunction = () => [{ title: "Overview · Isotrope" }];
 
 export async function loader(args: Route.LoaderArgs) {
   const member = await requireMember(args);
-  const team = member.role === "owner" ? await teamCounts(member.organizationId) : null;
-  return { name: member.user.name, role: member.role, organizationName: member.organizationName, team };
+  const staff = (staffRoles as readonly string[]).includes(member.role);
+  const [team, inventory] = await Promise.all([
+    member.role === "owner" ? teamCounts(member.organizationId) : null,
+    staff ? inventoryCounts(member.organizationId) : null,
+  ]);
+  return { name: member.user.name, role: member.role, organizationName: member.organizationName, team, inventory };
 }
 
-export default function Home({ loaderData }: Route.ComponentProps) {
-  const { name, role, organizationName, team } = loaderData;
+const teamLine = ({ members, pending }: { members: number; pending: number }) =>
+  `${members} ${members === 1 ? "member" : "members"}${pending ? ` · ${pending} invited` : ""}`;
+
+export default function Overview({ loaderData }: Route.ComponentProps) {
+  const { name, role, organizationName, team, inventory } = loaderData;
+  const guide = guideFor(role, team, inventory);
+  const cells = [
+    { label: "Organisation", value: organizationName },
+    { label: "Signed in as", value: name },
+    { label: "Role", value: roleLabels[role] },
+    ...(team ? [{ label: "Team", value: teamLine(team) }] : []),
+  ];
   return (
     <>
-      <PageHeader title={`Good to see you, ${name.split(" ")[0]}`}>{organizationName}</PageHeader>
-      <div className="grid gap-5 md:grid-cols-2">
-        <Card title="Your role">
-          <p className="font-medium text-ink-900">{roleLabels[role]}</p>
-          <p className="mt-1 text-sm text-ink-600">{roleSummaries[role]}</p>
-        </Card>
-        {team ? (
-          <Card title="Team" actions={<ButtonLink to="/members">Manage members</ButtonLink>}>
-            <p className="text-sm text-ink-800">
-              <strong className="text-2xl">{team.members}</strong> {team.members === 1 ? "member" : "members"}
-              {team.pending ? ` · ${team.pending} invitation${team.pending === 1 ? "" : "s"} waiting` : ""}
-            </p>
+      <PageHeader title="Overview" label={organizationName}>
+        What your role can do in Isotrope today, and the next step.
+      </PageHeader>
+      <div className="space-y-6">
+        <TitleBlock label="You and your organisation" cells={cells} />
+        <div className="grid gap-6 md:grid-cols-2">
+          <Card title="What you can do now">
+            <ul className="list-disc space-y-2 pl-5 marker:text-graphite-500">
+              {guide.now.map((line) => (
+                <li key={line}>{line}</li>
+              ))}
+            </ul>
           </Card>
-        ) : null}
-        <div className="md:col-span-2">
-          <RfCautions />
+          <Card title="Next">
+            <p className="font-bold text-ink-900">{guide.next.title}</p>
+            <p className="mt-1 text-graphite-600">{guide.next.text}</p>
+            <ButtonLink to={guide.next.to} tone="primary" className="mt-4">
+              {guide.next.action}
+            </ButtonLink>
+          </Card>
         </div>
+        <RfCautions />
       </div>
     </>
   );

@@ -9,6 +9,7 @@ import { parseForm } from "~/lib/form.server";
 import { organizationSchema } from "~/features/members/schemas";
 import { redirectWithFlash } from "~/infra/flash.server";
 import { invitationsFor } from "~/features/members/invitations.server";
+import { invitationRoleLabel } from "~/features/members/invitation-list";
 import { createOrganization } from "~/features/members/organizations.server";
 import { domainErrorReply } from "~/lib/domain-error";
 import { getMembership, requireUser } from "~/features/auth/guard.server";
@@ -48,8 +49,8 @@ export default function Welcome({ loaderData, actionData }: Route.ComponentProps
           <ul className="space-y-2 text-sm">
             {loaderData.invitations.map((i) => (
               <li key={i.id}>
-                <Link className="text-field-600 underline" to={`/invite/${i.id}`}>
-                  Join {i.organizationName} as {i.role}
+                <Link className="link" to={`/invite/${i.id}`}>
+                  Join {i.organizationName} as {invitationRoleLabel(i.role)}
                 </Link>
               </li>
             ))}
@@ -58,7 +59,7 @@ export default function Welcome({ loaderData, actionData }: Route.ComponentProps
       ) : null}
       <div className="mt-5">
         <Card title="Start a new consultancy">
-          <Form method="post" {...getFormProps(form)} className="space-y-4">
+          <Form method="post" {...getFormProps(form)} className="space-y-2">
             <FormErrors errors={form.errors} />
             <Field label="Consultancy name" {...inputProps(fields.name, "text")} />
             <Button>Create the organisation</Button>

@@ -26,7 +26,8 @@ test("an owner invites a reviewer who accepts and sees the reviewer's view", asy
   await invitee.getByLabel("Repeat the password").fill("reviewer-Pass-31");
   await shot(invitee, info, "02-accept");
   await invitee.getByRole("button", { name: "Create my account and join" }).click();
-  await expect(invitee.getByRole("heading", { name: /Good to see you, Rhea/ })).toBeVisible();
+  await expect(invitee.getByRole("heading", { name: "Overview" })).toBeVisible();
+  await expect(invitee.getByRole("main").getByText("Rhea Invited")).toBeVisible();
   await expect(invitee.getByText("Reviewing engineer").first()).toBeVisible();
   await expect(invitee.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Members" })).toHaveCount(0);
   await shot(invitee, info, "03-reviewer-overview");

@@ -7,7 +7,9 @@ export default defineConfig({
   fullyParallel: false,
   workers: 1,
   retries: 0,
-  timeout: 60_000,
+  // The longer flows (sign-up to reset, invitation to removal) pass in 20-50 s alone; on a machine
+  // shared with other builds they need more.
+  timeout: 120_000,
   reporter: [["list"], ["json"]],
   use: {
     baseURL: process.env.APP_URL ?? "http://127.0.0.1:3100",

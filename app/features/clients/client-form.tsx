@@ -3,8 +3,8 @@ import { getFormProps, useForm, type SubmissionResult } from "@conform-to/react"
 import { parseWithZod } from "@conform-to/zod/v4";
 import { Form, useNavigation } from "react-router";
 import { Button, ButtonLink, buttonClass } from "~/components/button";
-import { Field, FormErrors } from "~/components/field";
-import { TextAreaField } from "~/components/text-area-field";
+import { Field, FormErrors, TextAreaField } from "~/components/field";
+
 import { inputProps, textareaProps } from "~/lib/conform";
 import { clientFormSchema } from "./schemas";
 
@@ -29,13 +29,13 @@ export function ClientForm({ lastResult, defaults, submitLabel, cancelTo }: { la
       <TextAreaField label="Billing address" maxLength={500} {...textareaProps(fields.billingAddress)} />
       <TextAreaField label="Notes" hint="For your organisation only; clients never see these." maxLength={4000} {...textareaProps(fields.notes)} />
       <fieldset className="space-y-3">
-        <legend className="text-sm font-medium text-ink-800">Contacts</legend>
+        <legend className="text-sm font-medium text-ink-700">Contacts</legend>
         <FormErrors errors={fields.contacts.errors} />
-        {contacts.length === 0 ? <p className="text-sm text-ink-600">No contacts yet.</p> : null}
+        {contacts.length === 0 ? <p className="text-sm text-graphite-600">No contacts yet.</p> : null}
         {contacts.map((contact, index) => {
           const c = contact.getFieldset();
           return (
-            <div key={contact.key} className="grid gap-3 rounded-card border border-ink-200 bg-white p-3 sm:grid-cols-2">
+            <div key={contact.key} className="grid gap-3 rounded-sheet border border-rule bg-white p-3 sm:grid-cols-2">
               {c.id.initialValue ? <input type="hidden" name={c.id.name} value={c.id.initialValue} /> : null}
               <Field label="Name" maxLength={100} {...inputProps(c.name, "text")} />
               <Field label="Role" hint="e.g. property manager" maxLength={80} {...inputProps(c.role, "text")} />

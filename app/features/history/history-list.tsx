@@ -1,5 +1,5 @@
 // A list of audit events with a field-by-field table of what changed.
-import { formatDateTime, isoDate } from "~/lib/dates";
+import { formatDateTime, isoDateTime } from "~/lib/dates";
 import { changeRows, describeAction, recordLabel } from "./describe";
 
 export type HistoryEvent = {
@@ -16,16 +16,16 @@ export type HistoryEvent = {
 };
 
 export function HistoryList({ events, empty, context }: { events: HistoryEvent[]; empty: string; context?: (e: HistoryEvent) => React.ReactNode }) {
-  if (events.length === 0) return <p className="rounded-card border border-dashed border-ink-200 px-6 py-10 text-center text-sm text-ink-600">{empty}</p>;
+  if (events.length === 0) return <p className="rounded-sheet border border-dashed border-rule px-6 py-10 text-center text-sm text-graphite-600">{empty}</p>;
   return (
     <ol className="space-y-3">
       {events.map((e) => {
         const rows = changeRows(e.before, e.after);
         const label = recordLabel(e.after) ?? recordLabel(e.before);
         return (
-          <li key={e.id} className="rounded-card border border-ink-200 bg-white p-4">
+          <li key={e.id} className="rounded-sheet border border-rule bg-white p-4">
             <p className="text-sm">
-              <time dateTime={isoDate(e.at)} className="tabular-nums text-ink-600">
+              <time dateTime={isoDateTime(e.at)} className="tabular-nums text-graphite-600">
                 {formatDateTime(e.at)}
               </time>
               {" · "}
@@ -36,7 +36,7 @@ export function HistoryList({ events, empty, context }: { events: HistoryEvent[]
               <div className="mt-2 overflow-x-auto">
                 <table className="min-w-full text-sm">
                   <thead>
-                    <tr className="text-left text-ink-600">
+                    <tr className="text-left text-graphite-600">
                       <th scope="col" className="py-1 pr-4 font-medium">Field</th>
                       <th scope="col" className="py-1 pr-4 font-medium">Before</th>
                       <th scope="col" className="py-1 font-medium">After</th>
@@ -44,9 +44,9 @@ export function HistoryList({ events, empty, context }: { events: HistoryEvent[]
                   </thead>
                   <tbody>
                     {rows.map((r) => (
-                      <tr key={r.field} className="border-t border-ink-100 align-top">
-                        <th scope="row" className="py-1 pr-4 text-left font-normal text-ink-600">{r.field}</th>
-                        <td className="py-1 pr-4 break-words text-ink-600 line-through decoration-ink-400/60">{r.before}</td>
+                      <tr key={r.field} className="border-t border-rule align-top">
+                        <th scope="row" className="py-1 pr-4 text-left font-normal text-graphite-600">{r.field}</th>
+                        <td className="py-1 pr-4 break-words text-graphite-600 line-through decoration-rule-strong/60">{r.before}</td>
                         <td className="py-1 break-words text-ink-900">{r.after}</td>
                       </tr>
                     ))}
@@ -54,7 +54,7 @@ export function HistoryList({ events, empty, context }: { events: HistoryEvent[]
                 </table>
               </div>
             ) : rows.length ? (
-              <p className="mt-1 text-sm break-words text-ink-600">
+              <p className="mt-1 text-sm break-words text-graphite-600">
                 {rows.slice(0, 6).map((r) => `${r.field}: ${e.after ? r.after : r.before}`).join(" · ")}
                 {rows.length > 6 ? " …" : ""}
               </p>

@@ -70,12 +70,12 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
   for (let x = Math.ceil(bounds.minX / gridStep) * gridStep; x <= bounds.maxX; x += gridStep) {
     const [px] = frame.toPx(x, 0);
     const major = Math.abs(x % (gridStep * 5)) < 1e-9;
-    lines.push(<line key={`x${x}`} x1={px} x2={px} y1={0} y2={frame.height} className={major ? "stroke-ink-200" : "stroke-ink-100"} />);
+    lines.push(<line key={`x${x}`} x1={px} x2={px} y1={0} y2={frame.height} className={major ? "stroke-rule" : "stroke-rule"} />);
   }
   for (let y = Math.ceil(bounds.minY / gridStep) * gridStep; y <= bounds.maxY; y += gridStep) {
     const [, py] = frame.toPx(0, y);
     const major = Math.abs(y % (gridStep * 5)) < 1e-9;
-    lines.push(<line key={`y${y}`} y1={py} y2={py} x1={0} x2={frame.width} className={major ? "stroke-ink-200" : "stroke-ink-100"} />);
+    lines.push(<line key={`y${y}`} y1={py} y2={py} x1={0} x2={frame.width} className={major ? "stroke-rule" : "stroke-rule"} />);
   }
   const path = (pts: XY[], close = true) => pts.map((p, i) => `${i ? "L" : "M"}${frame.toPx(...p).map((v) => v.toFixed(2)).join(" ")}`).join("") + (close ? "Z" : "");
   const [originX, originY] = frame.toPx(0, 0);
@@ -87,7 +87,7 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
       viewBox={`0 0 ${frame.width} ${frame.height + FOOTER}`}
       role="img"
       aria-labelledby={titleId}
-      className={`block h-auto w-full select-none rounded-card border border-ink-200 bg-white ${onSiteClick ? "cursor-crosshair" : ""}`}
+      className={`block h-auto w-full select-none rounded-sheet border border-rule bg-white ${onSiteClick ? "cursor-crosshair" : ""}`}
       onClick={onSiteClick ? (e) => { const p = toSiteFromEvent(e); if (p) onSiteClick(p); } : undefined}
       onMouseMove={onSiteMove ? (e) => onSiteMove(toSiteFromEvent(e)) : undefined}
       onMouseLeave={onSiteMove ? () => onSiteMove(null) : undefined}
@@ -95,36 +95,36 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
       <title id={titleId}>{title}</title>
       <defs>
         <pattern id="plan-public" width="8" height="8" patternUnits="userSpaceOnUse">
-          <rect width="8" height="8" className="fill-ink-50" />
+          <rect width="8" height="8" className="fill-paper" />
         </pattern>
         <pattern id="plan-workers" width="8" height="8" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
-          <rect width="8" height="8" className="fill-ink-50" />
-          <line x1="0" y1="0" x2="0" y2="8" className="stroke-ink-200" strokeWidth="2" />
+          <rect width="8" height="8" className="fill-paper" />
+          <line x1="0" y1="0" x2="0" y2="8" className="stroke-rule" strokeWidth="2" />
         </pattern>
         <pattern id="plan-none" width="8" height="8" patternUnits="userSpaceOnUse">
-          <rect width="8" height="8" className="fill-ink-100" />
-          <path d="M0 0L8 8M8 0L0 8" className="stroke-ink-200" strokeWidth="1" />
+          <rect width="8" height="8" className="fill-paper-deep" />
+          <path d="M0 0L8 8M8 0L0 8" className="stroke-rule" strokeWidth="1" />
         </pattern>
         <pattern id="plan-solid" width="6" height="6" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
-          <rect width="6" height="6" className="fill-ink-200" />
-          <line x1="0" y1="0" x2="0" y2="6" className="stroke-ink-400" strokeWidth="1.5" />
+          <rect width="6" height="6" className="fill-rule" />
+          <line x1="0" y1="0" x2="0" y2="6" className="stroke-rule-strong" strokeWidth="1.5" />
         </pattern>
       </defs>
       {backdrop ? <image href={backdrop.href} width={backdrop.widthPx} height={backdrop.heightPx} opacity={backdrop.opacity} transform={backdropTransform(backdrop, frame)} preserveAspectRatio="none" /> : null}
       <g strokeWidth="1">{lines}</g>
       <g aria-hidden="true">
-        <line x1={originX - 6} x2={originX + 6} y1={originY} y2={originY} className="stroke-ink-400" />
-        <line y1={originY - 6} y2={originY + 6} x1={originX} x2={originX} className="stroke-ink-400" />
+        <line x1={originX - 6} x2={originX + 6} y1={originY} y2={originY} className="stroke-rule-strong" />
+        <line y1={originY - 6} y2={originY + 6} x1={originX} x2={originX} className="stroke-rule-strong" />
       </g>
       {surfaces.map((s) =>
         s.kind === "area" && s.polygon && s.polygon.length >= 3 ? (
           <g key={s.id}>
-            <path d={path(s.polygon)} fill={fills[s.access]} fillOpacity={backdrop ? 0.6 : 1} className={s.id === highlightId ? "stroke-ink-900" : "stroke-ink-600"} strokeWidth={s.id === highlightId ? 2.5 : 1.25} />
+            <path d={path(s.polygon)} fill={fills[s.access]} fillOpacity={backdrop ? 0.6 : 1} className={s.id === highlightId ? "stroke-ink-900" : "stroke-graphite-600"} strokeWidth={s.id === highlightId ? 2.5 : 1.25} />
             <AreaLabel frame={frame} surface={s} />
           </g>
         ) : s.kind === "facade" && s.line ? (
           <g key={s.id}>
-            <path d={path(s.line, false)} className={s.id === highlightId ? "stroke-ink-900" : "stroke-ink-800"} strokeWidth={5} strokeLinecap="butt" />
+            <path d={path(s.line, false)} className={s.id === highlightId ? "stroke-ink-900" : "stroke-ink-700"} strokeWidth={5} strokeLinecap="butt" />
             <FacadeLabel frame={frame} line={s.line} text={`${s.name} (facade)`} />
           </g>
         ) : null,
@@ -132,7 +132,7 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
       {obstructions.map((o) =>
         o.polygon.length >= 3 ? (
           <g key={o.id}>
-            <path d={path(o.polygon)} fill="url(#plan-solid)" className="stroke-ink-600" strokeWidth={1.25} />
+            <path d={path(o.polygon)} fill="url(#plan-solid)" className="stroke-graphite-600" strokeWidth={1.25} />
             <text {...labelAt(frame, ...centroid(o.polygon))} className="fill-ink-900 text-[10px]" textAnchor="middle">
               {o.name} · {o.heightM} m
             </text>
@@ -147,7 +147,7 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
             <text y={4} textAnchor="middle" className="fill-ink-900 text-[9px] font-semibold">
               {a.kind.slice(0, 1).toUpperCase()}
             </text>
-            <text x={9} y={4} className="fill-ink-800 text-[10px]">
+            <text x={9} y={4} className="fill-ink-700 text-[10px]">
               {a.name}
             </text>
           </g>
@@ -165,7 +165,7 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
       {children?.(frame)}
       <g aria-hidden="true">
         <rect x={0} y={frame.height} width={frame.width} height={FOOTER} className="fill-white" />
-        <line x1={0} x2={frame.width} y1={frame.height} y2={frame.height} className="stroke-ink-200" />
+        <line x1={0} x2={frame.width} y1={frame.height} y2={frame.height} className="stroke-rule" />
       </g>
       <ScaleBar frame={frame} metres={bar} />
       <NorthArrow x={frame.width - 24} y={frame.height + 22} />
@@ -190,7 +190,7 @@ function AreaLabel({ frame, surface }: { frame: PlanFrame; surface: PlanSurface 
   return (
     <text x={x} y={y} textAnchor="middle" className="pointer-events-none fill-ink-900 text-[11px]">
       <tspan x={x}>{surface.name}</tspan>
-      <tspan x={x} dy={13} className="fill-ink-600 text-[10px]">
+      <tspan x={x} dy={13} className="fill-graphite-600 text-[10px]">
         {elevation >= 0 ? "+" : "−"}
         {Math.abs(elevation).toFixed(1)} m
       </tspan>
@@ -207,7 +207,7 @@ function FacadeLabel({ frame, line, text }: { frame: PlanFrame; line: [XY, XY]; 
   const x = (a[0] + b[0]) / 2;
   const y = (a[1] + b[1]) / 2;
   return (
-    <text transform={`translate(${x} ${y}) rotate(${angle})`} y={-8} textAnchor="middle" className="fill-ink-800 text-[11px]">
+    <text transform={`translate(${x} ${y}) rotate(${angle})`} y={-8} textAnchor="middle" className="fill-ink-700 text-[11px]">
       {text}
     </text>
   );
@@ -232,10 +232,10 @@ function ScaleBar({ frame, metres }: { frame: PlanFrame; metres: number }) {
     <g aria-hidden="true">
       <rect x={x} y={y - 4} width={length / 2} height={4} className="fill-ink-900" />
       <rect x={x + length / 2} y={y - 4} width={length / 2} height={4} className="fill-white stroke-ink-900" strokeWidth={1} />
-      <text x={x} y={y + 12} className="fill-ink-800 text-[10px]">
+      <text x={x} y={y + 12} className="fill-ink-700 text-[10px]">
         0
       </text>
-      <text x={x + length} y={y + 12} textAnchor="end" className="fill-ink-800 text-[10px] tabular-nums">
+      <text x={x + length} y={y + 12} textAnchor="end" className="fill-ink-700 text-[10px] tabular-nums">
         {metres} m
       </text>
     </g>

@@ -3,8 +3,8 @@ import { getFormProps, useForm, type SubmissionResult } from "@conform-to/react"
 import { parseWithZod } from "@conform-to/zod/v4";
 import { Form, useNavigation } from "react-router";
 import { Button, ButtonLink } from "~/components/button";
-import { Field, FormErrors, SelectField } from "~/components/field";
-import { TextAreaField } from "~/components/text-area-field";
+import { Field, FormErrors, SelectField, TextAreaField } from "~/components/field";
+
 import { inputProps, selectProps, textareaProps } from "~/lib/conform";
 import { siteKindLabels, siteKinds } from "./kinds";
 import { siteFormSchema } from "./schemas";

@@ -66,24 +66,28 @@ export default function Account({ loaderData, actionData }: Route.ComponentProps
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
   });
+  const details = [
+    ["Name", name],
+    ["E-mail", email],
+    ["Organisation", organizationName],
+    ["Role", roleLabels[role]],
+  ] as const;
   return (
     <>
       <PageHeader title="Account">Your own details. Your organisation's owner sets roles.</PageHeader>
       <div className="grid gap-6 md:grid-cols-2">
         <Card title="You">
-          <dl className="grid grid-cols-[8rem_1fr] gap-y-2 text-sm">
-            <dt className="text-ink-600">Name</dt>
-            <dd>{name}</dd>
-            <dt className="text-ink-600">E-mail</dt>
-            <dd>{email}</dd>
-            <dt className="text-ink-600">Organisation</dt>
-            <dd>{organizationName}</dd>
-            <dt className="text-ink-600">Role</dt>
-            <dd>{roleLabels[role]}</dd>
+          <dl className="grid gap-x-4 gap-y-1 sm:grid-cols-[8rem_minmax(0,1fr)] sm:gap-y-3">
+            {details.map(([label, value]) => (
+              <div key={label} className="contents">
+                <dt className="label-caps sm:pt-1">{label}</dt>
+                <dd className="mb-2 [overflow-wrap:anywhere] sm:mb-0">{value}</dd>
+              </div>
+            ))}
           </dl>
         </Card>
         <Card title="Change password">
-          <Form method="post" {...getFormProps(form)} className="space-y-4">
+          <Form method="post" {...getFormProps(form)} className="space-y-2">
             <input type="hidden" name="intent" value="change-password" />
             <FormErrors errors={form.errors} />
             <Field label="Current password" autoComplete="current-password" {...inputProps(fields.current, "password")} />
@@ -94,12 +98,12 @@ export default function Account({ loaderData, actionData }: Route.ComponentProps
         </Card>
         {others.length ? (
           <Card title="Your other organisations">
-            <p className="mb-3 text-sm text-ink-600">Isotrope opens one organisation at a time; switching also sets where you start next time.</p>
-            <ul className="divide-y divide-ink-100 text-sm">
+            <p className="mb-3 text-sm text-graphite-600">Isotrope opens one organisation at a time; switching also sets where you start next time.</p>
+            <ul className="divide-y divide-rule text-sm">
               {others.map((o) => (
                 <li key={o.organizationId} className="flex items-center justify-between gap-3 py-2">
                   <span className="min-w-0 break-words">
-                    {o.organizationName} <span className="text-ink-600">· {isRole(o.role) ? roleLabels[o.role] : o.role}</span>
+                    {o.organizationName} <span className="text-graphite-600">· {isRole(o.role) ? roleLabels[o.role] : o.role}</span>
                   </span>
                   <Form method="post">
                     <input type="hidden" name="intent" value="switch-organization" />

@@ -44,7 +44,7 @@ export default function CheckEmail({ loaderData, actionData }: Route.ComponentPr
   return (
     <>
       <h1 className="mb-2 text-xl font-semibold">Check your e-mail</h1>
-      <p className="text-sm text-ink-600">
+      <p className="text-sm text-graphite-600">
         We sent a confirmation link to {email ? <strong className="text-ink-900">{email}</strong> : "the address you signed up with"}. Follow it
         within the hour to finish signing up.
       </p>

@@ -32,8 +32,8 @@ export default function ForgotPassword({ actionData }: Route.ComponentProps) {
   return (
     <>
       <h1 className="mb-1 text-xl font-semibold">Reset your password</h1>
-      <p className="mb-6 text-sm text-ink-600">We'll e-mail you a link to choose a new one.</p>
-      <Form method="post" {...getFormProps(form)} className="space-y-4">
+      <p className="mb-6 text-sm text-graphite-600">We'll e-mail you a link to choose a new one.</p>
+      <Form method="post" {...getFormProps(form)} className="space-y-2">
         <FormErrors errors={form.errors} />
         <Field label="E-mail" autoComplete="email" {...inputProps(fields.email, "email")} />
         <Button className="w-full">Send the link</Button>

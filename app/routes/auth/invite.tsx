@@ -82,7 +82,7 @@ export default function Invite({ loaderData, actionData }: Route.ComponentProps)
     return (
       <>
         {heading}
-        <p role="alert" className="text-sm text-ink-600">
+        <p role="alert" className="text-sm text-graphite-600">
           {v.problem}
         </p>
         <FooterLink to={v.next.to}>{v.next.label}</FooterLink>
@@ -90,7 +90,7 @@ export default function Invite({ loaderData, actionData }: Route.ComponentProps)
     );
   }
   const intro = (
-    <p className="mb-6 text-sm text-ink-600">
+    <p className="mb-6 text-sm text-graphite-600">
       You are invited as <strong className="text-ink-900">{v.roleLabel}</strong>, for <strong className="text-ink-900">{v.email}</strong>.
     </p>
   );
@@ -100,9 +100,9 @@ export default function Invite({ loaderData, actionData }: Route.ComponentProps)
         {heading}
         {intro}
         {v.signedInEmail === v.email ? (
-          <Form method="post" className="space-y-4">
+          <Form method="post" className="space-y-2">
             {v.otherOrganizations.length ? (
-              <p className="text-sm text-ink-600">
+              <p className="text-sm text-graphite-600">
                 You are a member of {listNames(v.otherOrganizations)}. Joining adds {v.organizationName}: you stay a member of{" "}
                 {v.otherOrganizations.length > 1 ? "them" : "it"}, and Isotrope opens {v.organizationName} from now on. You can switch
                 back on your Account page.
@@ -112,7 +112,7 @@ export default function Invite({ loaderData, actionData }: Route.ComponentProps)
             <Button className="w-full">Join the organisation</Button>
           </Form>
         ) : (
-          <p role="alert" className="text-sm text-danger-600">
+          <p role="alert" className="text-sm text-danger-700">
             You are signed in as {v.signedInEmail}. Sign out, then open the link again.
           </p>
         )}
@@ -124,7 +124,7 @@ export default function Invite({ loaderData, actionData }: Route.ComponentProps)
       <>
         {heading}
         {intro}
-        <Link to={`/sign-in?redirectTo=${encodeURIComponent(`/invite/${v.id}`)}`} className="text-field-600 underline">
+        <Link to={`/sign-in?redirectTo=${encodeURIComponent(`/invite/${v.id}`)}`} className="link">
           Sign in to accept
         </Link>
       </>
@@ -134,7 +134,7 @@ export default function Invite({ loaderData, actionData }: Route.ComponentProps)
     <>
       {heading}
       {intro}
-      <Form method="post" {...getFormProps(form)} className="space-y-4">
+      <Form method="post" {...getFormProps(form)} className="space-y-2">
         <FormErrors errors={form.errors} />
         <Field label="Your name" autoComplete="name" {...inputProps(fields.name, "text")} />
         <Field label="Password" autoComplete="new-password" hint="At least 10 characters, letters mixed with digits or symbols." {...inputProps(fields.password, "password")} />

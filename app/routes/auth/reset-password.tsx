@@ -47,7 +47,7 @@ export default function ResetPassword({ loaderData, actionData }: Route.Componen
     return (
       <>
         <h1 className="mb-2 text-xl font-semibold">Link not accepted</h1>
-        <p role="alert" className="text-sm text-ink-600">
+        <p role="alert" className="text-sm text-graphite-600">
           {loaderData.problem}
         </p>
         <FooterLink to="/forgot-password">Send a new link</FooterLink>
@@ -57,7 +57,7 @@ export default function ResetPassword({ loaderData, actionData }: Route.Componen
   return (
     <>
       <h1 className="mb-6 text-xl font-semibold">Choose a new password</h1>
-      <Form method="post" {...getFormProps(form)} className="space-y-4">
+      <Form method="post" {...getFormProps(form)} className="space-y-2">
         <FormErrors errors={form.errors} />
         <input type="hidden" name="token" value={loaderData.token ?? ""} />
         <Field label="New password" autoComplete="new-password" hint="At least 10 characters, letters mixed with digits or symbols." {...inputProps(fields.password, "password")} />

@@ -40,8 +40,8 @@ export default function SignIn({ actionData }: Route.ComponentProps) {
   return (
     <>
       <h1 className="mb-1 text-xl font-semibold">Sign in</h1>
-      <p className="mb-6 text-sm text-ink-600">Welcome back. Use the e-mail your organisation knows you by.</p>
-      <Form method="post" {...getFormProps(form)} className="space-y-4">
+      <p className="mb-6 text-sm text-graphite-600">Welcome back. Use the e-mail your organisation knows you by.</p>
+      <Form method="post" {...getFormProps(form)} className="space-y-2">
         <FormErrors errors={form.errors} />
         <input type="hidden" name="redirectTo" value={params.get("redirectTo") ?? ""} />
         <Field label="E-mail" autoComplete="email" {...inputProps(fields.email, "email")} />
@@ -51,10 +51,10 @@ export default function SignIn({ actionData }: Route.ComponentProps) {
         </Button>
       </Form>
       <div className="mt-6 flex justify-between text-sm">
-        <Link to="/forgot-password" className="text-field-600 underline">
+        <Link to="/forgot-password" className="link">
           Forgot your password?
         </Link>
-        <Link to="/sign-up" className="text-field-600 underline">
+        <Link to="/sign-up" className="link">
           Create an account
         </Link>
       </div>

@@ -43,10 +43,10 @@ export default function SignUp({ actionData }: Route.ComponentProps) {
   return (
     <>
       <h1 className="mb-1 text-xl font-semibold">Create an account</h1>
-      <p className="mb-6 text-sm text-ink-600">
+      <p className="mb-6 text-sm text-graphite-600">
         For consultancies setting up Isotrope. Joining a colleague's organisation? Use the link in their invitation instead.
       </p>
-      <Form method="post" {...getFormProps(form)} className="space-y-4">
+      <Form method="post" {...getFormProps(form)} className="space-y-2">
         <FormErrors errors={form.errors} />
         <Field label="Your name" autoComplete="name" {...inputProps(fields.name, "text")} />
         <Field label="E-mail" autoComplete="email" {...inputProps(fields.email, "email")} />
@@ -58,7 +58,7 @@ export default function SignUp({ actionData }: Route.ComponentProps) {
       </Form>
       <p className="mt-6 text-sm">
         Have an account?{" "}
-        <Link to="/sign-in" className="text-field-600 underline">
+        <Link to="/sign-in" className="link">
           Sign in
         </Link>
       </p>

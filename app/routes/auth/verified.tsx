@@ -25,7 +25,7 @@ export default function Verified({ loaderData }: Route.ComponentProps) {
     return (
       <>
         <h1 className="mb-2 text-xl font-semibold">Link not accepted</h1>
-        <p className="text-sm text-ink-600" role="alert">
+        <p className="text-sm text-graphite-600" role="alert">
           {problem}
         </p>
         <FooterLink to="/sign-in">Go to sign-in</FooterLink>
@@ -36,7 +36,7 @@ export default function Verified({ loaderData }: Route.ComponentProps) {
     return (
       <>
         <h1 className="mb-2 text-xl font-semibold">E-mail confirmed</h1>
-        <p className="text-sm text-ink-600">
+        <p className="text-sm text-graphite-600">
           Thank you. {signedInAs} is confirmed and you are signed in.
         </p>
         <FooterLink to="/">Continue to Isotrope</FooterLink>
@@ -46,7 +46,7 @@ export default function Verified({ loaderData }: Route.ComponentProps) {
   return (
     <>
       <h1 className="mb-2 text-xl font-semibold">Sign in to continue</h1>
-      <p className="text-sm text-ink-600">
+      <p className="text-sm text-graphite-600">
         You are not signed in. If you have confirmed your address, sign in with it. If not, signing in sends you a new confirmation
         link.
       </p>

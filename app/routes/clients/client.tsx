@@ -73,7 +73,7 @@ export default function ClientPage({ loaderData, actionData }: Route.ComponentPr
   }
   return (
     <>
-      <p className="text-sm text-ink-600">
+      <p className="text-sm text-graphite-600">
         <Link to="/clients" className="underline">
           Clients
         </Link>
@@ -94,26 +94,26 @@ export default function ClientPage({ loaderData, actionData }: Route.ComponentPr
       <FormErrors errors={deleteError ? [deleteError] : null} />
       <div className="grid gap-5 md:grid-cols-2">
         <Card title="Billing address">
-          <p className="text-sm whitespace-pre-line break-words text-ink-800">{client.billingAddress || "None recorded."}</p>
+          <p className="text-sm whitespace-pre-line break-words text-ink-700">{client.billingAddress || "None recorded."}</p>
           {client.notes ? (
             <>
-              <h3 className="mt-4 text-sm font-medium text-ink-600">Notes</h3>
-              <p className="mt-1 text-sm whitespace-pre-line break-words text-ink-800">{client.notes}</p>
+              <h3 className="mt-4 text-sm font-medium text-graphite-600">Notes</h3>
+              <p className="mt-1 text-sm whitespace-pre-line break-words text-ink-700">{client.notes}</p>
             </>
           ) : null}
         </Card>
         <Card title="Contacts">
           {client.contacts.length === 0 ? (
-            <p className="text-sm text-ink-600">No contacts yet.</p>
+            <p className="text-sm text-graphite-600">No contacts yet.</p>
           ) : (
-            <ul className="divide-y divide-ink-100 text-sm">
+            <ul className="divide-y divide-rule text-sm">
               {client.contacts.map((c) => (
                 <li key={c.id} className="py-2">
                   <span className="block font-medium break-words text-ink-900">
                     {c.name}
-                    {c.role ? <span className="font-normal text-ink-600"> · {c.role}</span> : null}
+                    {c.role ? <span className="font-normal text-graphite-600"> · {c.role}</span> : null}
                   </span>
-                  <span className="block break-words text-ink-600">{[c.email, c.phone].filter(Boolean).join(" · ") || "No e-mail or phone"}</span>
+                  <span className="block break-words text-graphite-600">{[c.email, c.phone].filter(Boolean).join(" · ") || "No e-mail or phone"}</span>
                 </li>
               ))}
             </ul>
@@ -122,15 +122,15 @@ export default function ClientPage({ loaderData, actionData }: Route.ComponentPr
         <div className="md:col-span-2">
           <Card title={`Sites (${siteTotal})`} actions={canEdit ? <ButtonLink to={`/sites/new?client=${client.id}`}>New site for this client</ButtonLink> : null}>
             {sites.length === 0 ? (
-              <p className="text-sm text-ink-600">No sites for this client yet.</p>
+              <p className="text-sm text-graphite-600">No sites for this client yet.</p>
             ) : (
-              <ul className="divide-y divide-ink-100 text-sm">
+              <ul className="divide-y divide-rule text-sm">
                 {sites.map((s) => (
                   <li key={s.id} className="flex flex-wrap justify-between gap-2 py-2">
                     <Link to={`/sites/${s.id}`} className="font-medium break-words text-ink-900 underline">
                       {s.name}
                     </Link>
-                    <span className="text-ink-600">
+                    <span className="text-graphite-600">
                       {siteKindLabels[s.kind as SiteKind] ?? s.kind}
                       {s.city ? ` · ${s.city}` : ""} · {s.emitterCount} emitter{s.emitterCount === 1 ? "" : "s"}
                     </span>
@@ -142,7 +142,7 @@ export default function ClientPage({ loaderData, actionData }: Route.ComponentPr
         </div>
       </div>
       <Dialog open={confirm} onClose={() => setConfirm(false)} title={`Delete ${client.name}?`}>
-        <p className="text-sm text-ink-600">The client and its contacts are removed. A client with sites cannot be deleted: move or delete the sites first.</p>
+        <p className="text-sm text-graphite-600">The client and its contacts are removed. A client with sites cannot be deleted: move or delete the sites first.</p>
         <Form method="post" className="mt-4 flex justify-end gap-2" onSubmit={() => setConfirm(false)}>
           <input type="hidden" name="intent" value="delete" />
           <Button type="button" tone="secondary" onClick={() => setConfirm(false)}>

@@ -29,7 +29,7 @@ const columns = [
     header: "Client",
     meta: { sortKey: "name" },
     cell: (c) => (
-      <Link to={`/clients/${c.row.original.id}`} className="font-medium text-ink-900 underline decoration-ink-200 underline-offset-2 hover:decoration-ink-600">
+      <Link to={`/clients/${c.row.original.id}`} className="font-medium text-ink-900 underline decoration-rule underline-offset-2 hover:decoration-graphite-600">
         {c.getValue()}
       </Link>
     ),
@@ -48,15 +48,15 @@ export default function Clients({ loaderData }: Route.ComponentProps) {
       </PageHeader>
       <Form method="get" role="search" className="mb-4 flex flex-wrap items-end gap-3 text-sm">
         <label className="flex min-w-56 flex-1 flex-col gap-1">
-          <span className="font-medium text-ink-800">Search</span>
-          <input name="q" type="search" defaultValue={d.q} maxLength={100} placeholder="Client name" className="rounded-md border border-ink-200 bg-white px-3 py-2" />
+          <span className="font-medium text-ink-700">Search</span>
+          <input name="q" type="search" defaultValue={d.q} maxLength={100} placeholder="Client name" className="rounded-control border border-rule bg-white px-3 py-2" />
         </label>
         <input type="hidden" name="sort" value={d.sort} />
         <input type="hidden" name="dir" value={d.dir} />
-        <button type="submit" className="rounded-md bg-white px-3 py-2 font-medium ring-1 ring-ink-200 hover:bg-ink-50">
+        <button type="submit" className="rounded-control bg-white px-3 py-2 font-medium ring-1 ring-rule hover:bg-paper">
           Show
         </button>
-        {d.q ? <Link to="/clients" className="py-2 text-ink-600 underline">Clear</Link> : null}
+        {d.q ? <Link to="/clients" className="py-2 text-graphite-600 underline">Clear</Link> : null}
       </Form>
       <DataTable
         caption="Clients"

@@ -52,8 +52,8 @@ export default function OrganizationHistory({ loaderData }: Route.ComponentProps
       <PageHeader title="History">Every change anyone in your organisation made, newest first.</PageHeader>
       <Form method="get" className="mb-4 flex flex-wrap items-end gap-3 text-sm">
         <label className="flex flex-col gap-1">
-          <span className="font-medium text-ink-800">Records</span>
-          <select name="entity" defaultValue={filter.entity ?? ""} className="rounded-md border border-ink-200 bg-white px-2 py-2">
+          <span className="font-medium text-ink-700">Records</span>
+          <select name="entity" defaultValue={filter.entity ?? ""} className="rounded-control border border-rule bg-white px-2 py-2">
             <option value="">All</option>
             {entities.map(([k, label]) => (
               <option key={k} value={k}>
@@ -63,8 +63,8 @@ export default function OrganizationHistory({ loaderData }: Route.ComponentProps
           </select>
         </label>
         <label className="flex flex-col gap-1">
-          <span className="font-medium text-ink-800">By</span>
-          <select name="actor" defaultValue={filter.actor ?? ""} className="max-w-56 rounded-md border border-ink-200 bg-white px-2 py-2">
+          <span className="font-medium text-ink-700">By</span>
+          <select name="actor" defaultValue={filter.actor ?? ""} className="max-w-56 rounded-control border border-rule bg-white px-2 py-2">
             <option value="">Anyone</option>
             {actors.map((a) => (
               <option key={a.id} value={a.id}>
@@ -74,14 +74,14 @@ export default function OrganizationHistory({ loaderData }: Route.ComponentProps
           </select>
         </label>
         <label className="flex flex-col gap-1">
-          <span className="font-medium text-ink-800">From</span>
-          <input type="date" name="from" defaultValue={filter.from ?? ""} className="rounded-md border border-ink-200 bg-white px-2 py-1.5" />
+          <span className="font-medium text-ink-700">From</span>
+          <input type="date" name="from" defaultValue={filter.from ?? ""} className="rounded-control border border-rule bg-white px-2 py-1.5" />
         </label>
         <label className="flex flex-col gap-1">
-          <span className="font-medium text-ink-800">To</span>
-          <input type="date" name="to" defaultValue={filter.to ?? ""} className="rounded-md border border-ink-200 bg-white px-2 py-1.5" />
+          <span className="font-medium text-ink-700">To</span>
+          <input type="date" name="to" defaultValue={filter.to ?? ""} className="rounded-control border border-rule bg-white px-2 py-1.5" />
         </label>
-        <button type="submit" className="rounded-md bg-white px-3 py-2 font-medium ring-1 ring-ink-200 hover:bg-ink-50">
+        <button type="submit" className="rounded-control bg-white px-3 py-2 font-medium ring-1 ring-rule hover:bg-paper">
           Show
         </button>
       </Form>
@@ -90,7 +90,7 @@ export default function OrganizationHistory({ loaderData }: Route.ComponentProps
         empty="Nothing matches these filters."
         context={(e) =>
           e.siteId ? (
-            <Link to={`/sites/${e.siteId}/history`} className="text-ink-600 underline">
+            <Link to={`/sites/${e.siteId}/history`} className="text-graphite-600 underline">
               (site)
             </Link>
           ) : null
@@ -99,7 +99,7 @@ export default function OrganizationHistory({ loaderData }: Route.ComponentProps
       {pages > 1 ? (
         <nav aria-label="Pages" className="mt-4 flex items-center gap-3 text-sm">
           {page > 1 ? <Link to={link(page - 1)} className="underline">Newer</Link> : null}
-          <span className="tabular-nums text-ink-600">
+          <span className="tabular-nums text-graphite-600">
             Page {page} of {pages} · {total} events
           </span>
           {page < pages ? <Link to={link(page + 1)} className="underline">Older</Link> : null}

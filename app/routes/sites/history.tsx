@@ -19,7 +19,7 @@ export default function SiteHistory({ loaderData }: Route.ComponentProps) {
       <h2 id="history-title" className="mb-1 text-lg font-semibold">
         History
       </h2>
-      <p className="mb-4 text-sm text-ink-600">Every change to this site's details, layout, emitters, visits and readings, newest first.</p>
+      <p className="mb-4 text-sm text-graphite-600">Every change to this site's details, layout, emitters, visits and readings, newest first.</p>
       <HistoryList events={loaderData.events} empty="No changes recorded yet." />
     </section>
   );

@@ -35,7 +35,7 @@ const columns = [
     header: "Site",
     meta: { sortKey: "name" },
     cell: (c) => (
-      <Link to={`/sites/${c.row.original.id}`} className="font-medium text-ink-900 underline decoration-ink-200 underline-offset-2 hover:decoration-ink-600">
+      <Link to={`/sites/${c.row.original.id}`} className="font-medium text-ink-900 underline decoration-rule underline-offset-2 hover:decoration-graphite-600">
         {c.getValue()}
       </Link>
     ),
@@ -45,7 +45,7 @@ const columns = [
   column.accessor("clientName", {
     header: "Client",
     meta: { sortKey: "client" },
-    cell: (c) => (c.row.original.clientId ? <Link to={`/clients/${c.row.original.clientId}`} className="hover:underline">{c.getValue()}</Link> : <span className="text-ink-400">—</span>),
+    cell: (c) => (c.row.original.clientId ? <Link to={`/clients/${c.row.original.clientId}`} className="hover:underline">{c.getValue()}</Link> : <span className="text-graphite-500">—</span>),
   }),
   column.accessor("emitterCount", { header: "Emitters", meta: { sortKey: "emitters", align: "right" } }),
   column.accessor("updatedAt", { header: "Changed", meta: { sortKey: "updated" }, cell: (c) => formatDate(c.getValue()) }),
@@ -61,12 +61,12 @@ export default function Sites({ loaderData }: Route.ComponentProps) {
       </PageHeader>
       <Form method="get" role="search" className="mb-4 flex flex-wrap items-end gap-3 text-sm">
         <label className="flex min-w-56 flex-1 flex-col gap-1">
-          <span className="font-medium text-ink-800">Search</span>
-          <input name="q" type="search" defaultValue={d.q} maxLength={100} placeholder="Name, city or address" className="rounded-md border border-ink-200 bg-white px-3 py-2" />
+          <span className="font-medium text-ink-700">Search</span>
+          <input name="q" type="search" defaultValue={d.q} maxLength={100} placeholder="Name, city or address" className="rounded-control border border-rule bg-white px-3 py-2" />
         </label>
         <label className="flex flex-col gap-1">
-          <span className="font-medium text-ink-800">Kind</span>
-          <select name="kind" defaultValue={d.kind ?? ""} className="rounded-md border border-ink-200 bg-white px-2 py-2">
+          <span className="font-medium text-ink-700">Kind</span>
+          <select name="kind" defaultValue={d.kind ?? ""} className="rounded-control border border-rule bg-white px-2 py-2">
             <option value="">Any kind</option>
             {siteKinds.map((k) => (
               <option key={k} value={k}>
@@ -76,8 +76,8 @@ export default function Sites({ loaderData }: Route.ComponentProps) {
           </select>
         </label>
         <label className="flex flex-col gap-1">
-          <span className="font-medium text-ink-800">Client</span>
-          <select name="client" defaultValue={d.clientId ?? ""} className="max-w-64 rounded-md border border-ink-200 bg-white px-2 py-2">
+          <span className="font-medium text-ink-700">Client</span>
+          <select name="client" defaultValue={d.clientId ?? ""} className="max-w-64 rounded-control border border-rule bg-white px-2 py-2">
             <option value="">Any client</option>
             {d.clients.map((c) => (
               <option key={c.id} value={c.id}>
@@ -88,11 +88,11 @@ export default function Sites({ loaderData }: Route.ComponentProps) {
         </label>
         <input type="hidden" name="sort" value={d.sort} />
         <input type="hidden" name="dir" value={d.dir} />
-        <button type="submit" className="rounded-md bg-white px-3 py-2 font-medium ring-1 ring-ink-200 hover:bg-ink-50">
+        <button type="submit" className="rounded-control bg-white px-3 py-2 font-medium ring-1 ring-rule hover:bg-paper">
           Show
         </button>
         {filtered ? (
-          <Link to="/sites" className="py-2 text-ink-600 underline">
+          <Link to="/sites" className="py-2 text-graphite-600 underline">
             Clear
           </Link>
         ) : null}

@@ -31,7 +31,7 @@ export default function SitePage({ loaderData }: Route.ComponentProps) {
   return (
     <>
       <header className="mb-5">
-        <p className="text-sm text-ink-600">
+        <p className="text-sm text-graphite-600">
           <Link to="/sites" className="underline">
             Sites
           </Link>{" "}
@@ -40,7 +40,7 @@ export default function SitePage({ loaderData }: Route.ComponentProps) {
         <div className="mt-1 flex flex-wrap items-start justify-between gap-3">
           <div className="min-w-0">
             <h1 className="text-2xl font-semibold tracking-tight break-words text-ink-900">{site.name}</h1>
-            <p className="mt-1 text-sm break-words text-ink-600">
+            <p className="mt-1 text-sm break-words text-graphite-600">
               {place || "No address yet"}
               {site.clientId ? (
                 <>
@@ -54,19 +54,19 @@ export default function SitePage({ loaderData }: Route.ComponentProps) {
             </p>
           </div>
           {canEdit ? (
-            <Link to={`/sites/${site.id}/edit`} className="rounded-md bg-white px-3 py-1.5 text-sm font-medium ring-1 ring-ink-200 hover:bg-ink-50">
+            <Link to={`/sites/${site.id}/edit`} className="rounded-control bg-white px-3 py-1.5 text-sm font-medium ring-1 ring-rule hover:bg-paper">
               Edit details
             </Link>
           ) : null}
         </div>
-        <nav aria-label="Site sections" className="mt-4 flex gap-1 overflow-x-auto border-b border-ink-200">
+        <nav aria-label="Site sections" className="mt-4 flex gap-1 overflow-x-auto border-b border-rule">
           {sections.map((s) => (
             <NavLink
               key={s.label}
               to={s.to ? `/sites/${site.id}/${s.to}` : `/sites/${site.id}`}
               end={s.end}
               className={({ isActive }) =>
-                `-mb-px whitespace-nowrap border-b-2 px-3 py-2 text-sm ${isActive ? "border-ink-900 font-medium text-ink-900" : "border-transparent text-ink-600 hover:text-ink-900"}`
+                `-mb-px whitespace-nowrap border-b-2 px-3 py-2 text-sm ${isActive ? "border-ink-900 font-medium text-ink-900" : "border-transparent text-graphite-600 hover:text-ink-900"}`
               }
             >
               {s.label}

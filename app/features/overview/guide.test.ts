@@ -1,0 +1,37 @@
+import { describe, expect, it } from "vitest";
+import { roles, sectionsFor } from "~/lib/roles";
+import { guideFor } from "./guide";
+
+describe("guideFor", () => {
+  it("sends every role's next step to a page that role may open", () => {
+    for (const role of roles) {
+      const { next, now } = guideFor(role, { members: 3, pending: 1 }, { sites: 0, clients: 0 });
+      expect(sectionsFor(role).map((s) => s.path), role).toContain(next.to);
+      expect(now.length, role).toBeGreaterThan(0);
+    }
+  });
+
+  it("asks a lone owner to invite the first colleague", () => {
+    expect(guideFor("owner", { members: 1, pending: 0 }).next.title).toBe("Invite your first colleague");
+  });
+
+  it("sends engineers to record their first site, then to the sites on record", () => {
+    expect(guideFor("engineer", null, { sites: 0, clients: 0 }).next.title).toBe("Record your first site");
+    expect(guideFor("reviewer", null, { sites: 3, clients: 1 }).next.title).toBe("3 sites on record");
+    expect(guideFor("client", null, null).now.join(" ")).not.toContain("Record");
+  });
+
+  it("points an owner at invitations still waiting, counted", () => {
+    expect(guideFor("owner", { members: 4, pending: 2 }).next.title).toBe("2 invitations waiting");
+    expect(guideFor("owner", { members: 4, pending: 1 }).next.title).toBe("1 invitation waiting");
+  });
+
+  it("names no section that is not built", () => {
+    for (const role of roles) {
+      const text = JSON.stringify(guideFor(role, { members: 2, pending: 0 }, { sites: 2, clients: 1 }));
+      for (const unbuilt of ["assessment", "document", "invoice", "certificate", "filing", "report"]) {
+        expect(text.toLowerCase(), `${role} mentions ${unbuilt}`).not.toContain(unbuilt);
+      }
+    }
+  });
+});
