@@ -43,6 +43,10 @@ export default [
     route("v1/sites", "routes/api/v1/sites.ts"),
     route("v1/sites/:siteId", "routes/api/v1/site.ts"),
     route("v1/sites/:siteId/history", "routes/api/v1/site-history.ts"),
+    route("v1/sites/:siteId/visits", "routes/api/v1/site-visits.ts"),
+    route("v1/visits/:visitId", "routes/api/v1/visit.ts"),
+    route("v1/visits/:visitId/photos", "routes/api/v1/visit-photos.ts"),
+    route("v1/visits/:visitId/readings", "routes/api/v1/visit-readings.ts"),
   ]),
   route("*", "routes/not-found.tsx"),
 ] satisfies RouteConfig;

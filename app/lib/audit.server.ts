@@ -34,3 +34,21 @@ export function auditChange(tx: Tx, actor: Actor, change: RecordChange) {
     after: change.after,
   });
 }
+
+/** Many changes in one statement (an import of hundreds of rows), each its own event. */
+export async function auditChanges(tx: Tx, actor: Actor, changes: RecordChange[]) {
+  for (let i = 0; i < changes.length; i += 1000) {
+    await tx.insert(schema.auditEvent).values(
+      changes.slice(i, i + 1000).map((change) => ({
+        organizationId: actor.organizationId,
+        actorUserId: actor.userId,
+        action: change.action,
+        subjectType: change.entity,
+        subjectId: change.entityId,
+        siteId: change.siteId ?? null,
+        before: change.before,
+        after: change.after,
+      })),
+    );
+  }
+}

@@ -55,6 +55,8 @@ export const reading = pgTable(
     organizationId: text("organization_id").notNull().references(() => organization.id, { onDelete: "cascade" }),
     visitId: text("visit_id").notNull().references(() => visit.id, { onDelete: "cascade" }),
     surfaceId: text("surface_id").references(() => surface.id, { onDelete: "set null" }),
+    /** Order within the visit, as entered or imported. */
+    position: integer("position").notNull().default(0),
     label: text("label").notNull().default(""),
     x: doublePrecision("x").notNull(),
     y: doublePrecision("y").notNull(),
@@ -71,5 +73,5 @@ export const reading = pgTable(
     version: version(),
     createdAt: createdAt(),
   },
-  (t) => [index("reading_visit_idx").on(t.visitId)],
+  (t) => [index("reading_visit_idx").on(t.visitId, t.position)],
 );
