@@ -55,6 +55,6 @@ export async function postReadings(who: Actor & Scope, visitId: string, request:
     const fields = Object.fromEntries(
       problems.map((p) => ("index" in p ? [`readings[${p.index}].${p.field}`, p.message] : [p.row === null ? "file" : `row ${p.row}${p.column ? `.${p.column}` : ""}`, p.message])),
     );
-    return apiError(400, error.message, fields, { problems });
+    return apiError(400, error.message, fields, { problems, validCount: error.validCount });
   }
 }

@@ -15,7 +15,7 @@ type Who = Actor & Scope;
 type Where = { visitId?: string; siteId?: string };
 
 /** The site's surfaces by id and name, for resolving the surface a reading names. */
-export function siteSurfaces(tx: Tx | typeof db, siteId: string): Promise<SurfaceRef[]> {
+export function siteSurfaces(siteId: string, tx: Tx | typeof db = db): Promise<SurfaceRef[]> {
   return tx.select({ id: surface.id, name: surface.name }).from(surface).where(eq(surface.siteId, siteId)).orderBy(asc(surface.position), asc(surface.createdAt));
 }
 
@@ -38,7 +38,11 @@ export async function findReading(scope: Scope, readingId: string, where: Where 
 
 /** A batch refused for its rows' problems: the message, and each problem for the report. */
 export class ReadingsRefused<P> extends DomainError {
-  constructor(message: string, readonly problems: P[]) {
+  constructor(
+    message: string,
+    readonly problems: P[],
+    readonly validCount = 0,
+  ) {
     super(message, 400);
   }
 }
@@ -51,10 +55,10 @@ export type ReadingsCheck<P> = { valid: NewReading[]; problems: P[] };
  */
 export async function addReadings<P>(who: Who, visitId: string, check: (surfaces: SurfaceRef[]) => ReadingsCheck<P>, options: { validOnly?: boolean; siteId?: string } = {}) {
   return inVisit(who, visitId, options.siteId, async (tx, current) => {
-    const { valid, problems } = check(await siteSurfaces(tx, current.siteId));
+    const { valid, problems } = check(await siteSurfaces(current.siteId, tx));
     if (problems.length && !options.validOnly) {
       const n = problems.length;
-      throw new ReadingsRefused(`${n} problem${n === 1 ? "" : "s"} in the readings; nothing was stored. Fix ${n === 1 ? "it" : "them"}, or store the valid readings only.`, problems);
+      throw new ReadingsRefused(`${n} problem${n === 1 ? "" : "s"} in the readings; nothing was stored. Fix ${n === 1 ? "it" : "them"}, or store the valid readings only.`, problems, valid.length);
     }
     if (valid.length === 0) throw new ReadingsRefused("There is no valid reading to store.", problems);
     const [{ next }] = await tx.select({ next: sql<number>`coalesce(max(${reading.position}) + 1, 0)::int` }).from(reading).where(eq(reading.visitId, visitId));
@@ -80,7 +84,7 @@ export async function updateReading(who: Who, readingId: string, input: ReadingI
     const [row] = await tx.select().from(reading).where(eq(reading.id, readingId)).for("update");
     if (!row) throw new DomainError("No such reading.", 404);
     if (row.version !== input.version) throw staleEdit({ ...snapshot(row), version: row.version });
-    const surfaceChoice = resolveSurface(input, await siteSurfaces(tx, current.siteId));
+    const surfaceChoice = resolveSurface(input, await siteSurfaces(current.siteId, tx));
     if (!surfaceChoice.ok) throw new DomainError(surfaceChoice.message, 400, "surfaceId");
     const [updated] = await tx.update(reading).set({ ...toNewReading(input, surfaceChoice.id), version: row.version + 1 }).where(eq(reading.id, readingId)).returning();
     const diff = changedFields(snapshot(row), snapshot(updated));

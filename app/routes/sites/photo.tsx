@@ -1,0 +1,149 @@
+import { getFormProps, useForm } from "@conform-to/react";
+import { parseWithZod } from "@conform-to/zod/v4";
+import { useState } from "react";
+import { data, Form, Link, useNavigation } from "react-router";
+import { Button } from "~/components/button";
+import { Dialog } from "~/components/dialog";
+import { Field, FormErrors } from "~/components/field";
+import { Card } from "~/components/panels";
+import { requireMember } from "~/features/auth/guard.server";
+import { actorOf, scopeOf } from "~/features/sites/scope.server";
+import { formatBytes } from "~/features/visits/format";
+import { formatPosition } from "~/features/visits/photo-exif";
+import { deletePhoto, findPhoto, updateCaption } from "~/features/visits/photos.server";
+import { captionSchema } from "~/features/visits/schemas";
+import { findVisit } from "~/features/visits/visits.server";
+import { redirectWithFlash } from "~/infra/flash.server";
+import { inputProps } from "~/lib/conform";
+import { formatDate } from "~/lib/dates";
+import { DomainError, domainErrorReply } from "~/lib/domain-error";
+import { found } from "~/lib/responses.server";
+import { canEditInventory, inventoryEditors, staffRoles } from "~/lib/roles";
+import type { Route } from "./+types/photo";
+
+export const meta: Route.MetaFunction = ({ data }) => [{ title: data ? `${data.photo.caption || data.photo.fileName} · Isotrope` : "Photo · Isotrope" }];
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const member = await requireMember(request, { roles: staffRoles });
+  const scope = scopeOf(member);
+  const visit = found(await findVisit(scope, params.visitId, params.siteId), "No such visit on this site.");
+  const photo = found(await findPhoto(scope, params.photoId, { visitId: visit.id, siteId: visit.siteId }), "No such photo in this visit.");
+  return { photo, visit: { id: visit.id, siteId: visit.siteId, visitedOn: visit.visitedOn }, canEdit: canEditInventory(member.role) };
+}
+
+export async function action({ request, params }: Route.ActionArgs) {
+  const member = await requireMember(request, { roles: inventoryEditors });
+  const formData = await request.formData();
+  const intent = formData.get("intent");
+  formData.delete("intent");
+  const where = { visitId: params.visitId, siteId: params.siteId };
+  const visitPath = `/sites/${params.siteId}/visits/${params.visitId}`;
+  if (intent === "delete-photo") {
+    try {
+      await deletePhoto(actorOf(member), params.photoId, where);
+    } catch (error) {
+      if (error instanceof DomainError) return data({ deleteError: error.message }, { status: error.status });
+      throw error;
+    }
+    return redirectWithFlash(visitPath, { kind: "success", message: "Photo deleted." });
+  }
+  const submission = parseWithZod(formData, { schema: captionSchema });
+  if (submission.status !== "success") return data(submission.reply(), { status: 400 });
+  if (!submission.value.version) return data(submission.reply({ formErrors: ["The form is missing the version it was opened at. Reload the page."] }), { status: 400 });
+  try {
+    await updateCaption(actorOf(member), params.photoId, { caption: submission.value.caption, version: submission.value.version }, where);
+    return redirectWithFlash(`${visitPath}/photos/${params.photoId}`, { kind: "success", message: "Caption saved." });
+  } catch (error) {
+    return domainErrorReply(error, submission);
+  }
+}
+
+function CaptionForm({ caption, version, lastResult }: { caption: string; version: number; lastResult: never }) {
+  const navigation = useNavigation();
+  const [form, fields] = useForm({ lastResult, defaultValue: { caption }, onValidate: ({ formData }) => parseWithZod(formData, { schema: captionSchema }), shouldValidate: "onSubmit" });
+  return (
+    <Form method="post" {...getFormProps(form)} className="flex flex-wrap items-end gap-3">
+      <FormErrors errors={form.errors} />
+      <input type="hidden" name="version" value={version} />
+      <div className="min-w-0 flex-1">
+        <Field label="Caption" maxLength={300} {...inputProps(fields.caption, "text")} />
+      </div>
+      <Button disabled={navigation.state === "submitting"}>Save caption</Button>
+    </Form>
+  );
+}
+
+export default function PhotoPage({ loaderData, actionData }: Route.ComponentProps) {
+  const { photo, visit, canEdit } = loaderData;
+  const [confirm, setConfirm] = useState(false);
+  const visitPath = `/sites/${visit.siteId}/visits/${visit.id}`;
+  const deleteError = actionData && "deleteError" in actionData ? actionData.deleteError : null;
+  const captionReply = actionData && "status" in actionData ? actionData : undefined;
+  return (
+    <div className="space-y-5">
+      <div className="flex flex-wrap items-end justify-between gap-3">
+        <div className="min-w-0">
+          <p className="text-sm text-ink-600">
+            <Link to={visitPath} className="underline">
+              Visit on {formatDate(visit.visitedOn)}
+            </Link>{" "}
+            / Photo
+          </p>
+          <h2 className="text-lg font-semibold break-words">{photo.caption || photo.fileName}</h2>
+        </div>
+        {canEdit ? (
+          <Button type="button" tone="danger" onClick={() => setConfirm(true)}>
+            Delete photo
+          </Button>
+        ) : null}
+      </div>
+      <FormErrors errors={deleteError ? [deleteError] : null} />
+      <figure className="overflow-hidden rounded-card border border-ink-200 bg-ink-900">
+        <img src={`/files/${photo.fileId}`} alt={photo.caption || `Photo ${photo.fileName}`} width={photo.widthPx} height={photo.heightPx} className="mx-auto max-h-[75vh] w-auto max-w-full object-contain" />
+      </figure>
+      <Card title="About this photo">
+        <dl className="grid gap-x-6 gap-y-3 text-sm sm:grid-cols-2">
+          <div>
+            <dt className="font-medium text-ink-600">Taken</dt>
+            <dd className="mt-0.5 text-ink-900">{photo.takenAt ? `${new Date(photo.takenAt).toISOString().slice(0, 16).replace("T", ", ")} by the camera's clock` : "Not recorded in the file"}</dd>
+          </div>
+          <div>
+            <dt className="font-medium text-ink-600">Position (GPS)</dt>
+            <dd className="mt-0.5 text-ink-900">{photo.latitude !== null && photo.longitude !== null ? formatPosition(photo.latitude, photo.longitude) : "Not recorded in the file"}</dd>
+          </div>
+          <div>
+            <dt className="font-medium text-ink-600">File</dt>
+            <dd className="mt-0.5 break-all text-ink-900">
+              {photo.fileName} · {photo.mediaType.replace("image/", "").toUpperCase()} · {photo.widthPx} × {photo.heightPx} px · {formatBytes(photo.byteSize)}
+            </dd>
+          </div>
+          <div>
+            <dt className="font-medium text-ink-600">Original</dt>
+            <dd className="mt-0.5">
+              <a href={`/files/${photo.fileId}`} className="text-field-600 underline" target="_blank" rel="noreferrer">
+                Open the full-size file
+              </a>
+            </dd>
+          </div>
+        </dl>
+        {canEdit ? (
+          <div className="mt-5 border-t border-ink-100 pt-4">
+            <CaptionForm key={photo.version} caption={photo.caption} version={photo.version} lastResult={captionReply as never} />
+          </div>
+        ) : null}
+      </Card>
+      <Dialog open={confirm} onClose={() => setConfirm(false)} title="Delete this photo?">
+        <p className="text-sm text-ink-600">The photo and its thumbnail are removed from the visit. History keeps a record of it.</p>
+        <Form method="post" className="mt-4 flex justify-end gap-2" onSubmit={() => setConfirm(false)}>
+          <input type="hidden" name="intent" value="delete-photo" />
+          <Button type="button" tone="secondary" onClick={() => setConfirm(false)}>
+            Keep
+          </Button>
+          <Button tone="danger">Delete</Button>
+        </Form>
+      </Dialog>
+    </div>
+  );
+}
+
+export { RouteError as ErrorBoundary } from "~/components/route-error";
