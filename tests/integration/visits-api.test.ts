@@ -84,11 +84,15 @@ describe("POST /api/v1/sites/:id/visits", () => {
   });
 
   it("lists a site's visits newest first with their counts", async () => {
+    const counted = (await newVisit({ visitedOn: "2026-06-30" })).body.visit.id;
+    const reading = { x: 1, y: 1, heightM: 1.5, value: 2, unit: "V/m" };
+    expect((await postReadings(counted, { json: { readings: [reading, reading] } })).status).toBe(201);
     const got = await callApi(siteVisitsApi, "GET", `/api/v1/sites/${siteId}/visits`, { auth: { token }, params: { siteId } });
     expect(got.status).toBe(200);
     const dates = got.body.visits.map((v: { visitedOn: string }) => v.visitedOn);
     expect(dates).toEqual([...dates].sort().reverse());
-    expect(got.body.visits[0]).toHaveProperty("readingCount");
+    expect(got.body.visits[0]).toMatchObject({ id: counted, readingCount: 2, photoCount: 0 });
+    expect(got.body.visits.slice(1).every((v: { readingCount: number }) => v.readingCount === 0)).toBe(true);
   });
 });
 

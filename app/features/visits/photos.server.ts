@@ -86,7 +86,7 @@ export async function updateCaption(who: Who, photoId: string, input: { caption:
     if (row.version !== input.version) throw staleEdit({ caption: row.caption, version: row.version });
     const [updated] = await tx.update(photo).set({ caption, version: row.version + 1 }).where(eq(photo.id, photoId)).returning();
     const diff = changedFields(snapshot(row), snapshot(updated));
-    if (diff.keys.length) await auditChange(tx, who, { action: "photo.updated", entity: "photo", entityId: photoId, siteId: current.siteId, before: diff.before, after: diff.after });
+    if (diff.keys.length) await auditChange(tx, who, { action: "photo.updated", entity: "photo", entityId: photoId, siteId: current.siteId, before: { fileName: found.fileName, ...diff.before }, after: { fileName: found.fileName, ...diff.after } });
     return { ...updated, fileName: found.fileName, mediaType: found.mediaType, byteSize: found.byteSize };
   });
 }

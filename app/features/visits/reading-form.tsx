@@ -29,7 +29,16 @@ export type ReadingDefaults = {
   notes?: string;
 };
 
-type Props = { intent: "add-reading" | "edit-reading"; formId: string; defaults?: ReadingDefaults; surfaces: { id: string; name: string }[]; submitLabel: string; onDone?: () => void; onCancel?: () => void };
+type Props = {
+  intent: "add-reading" | "edit-reading";
+  formId: string;
+  defaults?: ReadingDefaults;
+  surfaces: { id: string; name: string }[];
+  submitLabel: string;
+  /** Called once the server has stored the reading, with the values sent. */
+  onDone?: (sent: Record<string, unknown>) => void;
+  onCancel?: () => void;
+};
 
 function preview(values: { value?: unknown; unit?: unknown; frequencyMHz?: unknown; standard?: unknown; tier?: unknown }) {
   const value = Number(values.value);
@@ -45,7 +54,8 @@ const clean = (d: ReadingDefaults = {}) => Object.fromEntries(Object.entries({ u
 
 export function ReadingForm({ intent, formId, defaults, surfaces, submitLabel, onDone, onCancel }: Props) {
   const fetcher = useFetcher();
-  const result = fetcher.state === "idle" && fetcher.data && "status" in (fetcher.data as object) ? (fetcher.data as never) : undefined;
+  // Every answer to this form's fetcher is Conform's reply (a reset after an add has no status).
+  const result = fetcher.state === "idle" && fetcher.data ? (fetcher.data as never) : undefined;
   const [form, fields] = useForm({
     id: formId,
     lastResult: result,
@@ -59,8 +69,10 @@ export function ReadingForm({ intent, formId, defaults, surfaces, submitLabel, o
   });
   const succeeded = (result as { status?: string } | undefined)?.status === "success";
   useEffect(() => {
-    if (succeeded) onDone?.();
-  }, [succeeded, result, onDone]);
+    if (succeeded) onDone?.((form.value ?? {}) as Record<string, unknown>);
+    // Once per answer: `result` changes identity with each reply.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [succeeded, result]);
   const percent = fields.unit.value === "percent";
   const shown = preview({ value: fields.value.value, unit: fields.unit.value, frequencyMHz: fields.frequencyMHz.value, standard: fields.standard.value, tier: fields.tier.value });
   return (

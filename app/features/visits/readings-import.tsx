@@ -40,7 +40,7 @@ export function ReadingsImport({ visitId }: { visitId: string }) {
   };
 
   return (
-    <form onSubmit={onSubmit} aria-label="Import readings from a CSV file" className="space-y-3">
+    <form onSubmit={onSubmit} className="space-y-3">
       <div className="flex flex-wrap items-end gap-3">
         <div className="min-w-0 flex-1">
           <label htmlFor="readings-csv" className="mb-1 block text-sm font-medium text-ink-800">

@@ -88,7 +88,7 @@ export async function updateReading(who: Who, readingId: string, input: ReadingI
     if (!surfaceChoice.ok) throw new DomainError(surfaceChoice.message, 400, "surfaceId");
     const [updated] = await tx.update(reading).set({ ...toNewReading(input, surfaceChoice.id), version: row.version + 1 }).where(eq(reading.id, readingId)).returning();
     const diff = changedFields(snapshot(row), snapshot(updated));
-    if (diff.keys.length) await auditChange(tx, who, { action: "reading.updated", entity: "reading", entityId: readingId, siteId: current.siteId, before: diff.before, after: diff.after });
+    if (diff.keys.length) await auditChange(tx, who, { action: "reading.updated", entity: "reading", entityId: readingId, siteId: current.siteId, before: { label: row.label, ...diff.before }, after: { label: updated.label, ...diff.after } });
     return updated;
   });
 }

@@ -71,7 +71,7 @@ export async function visitPageAction(member: Member, params: Params, formData: 
         },
         { siteId: params.siteId },
       );
-      return data(submission.reply({ resetForm: true }));
+      return data(submission.reply());
     } catch (error) {
       if (error instanceof ReadingsRefused) return data(submission.reply({ fieldErrors: { surfaceId: error.problems.map(String) } }), { status: 400 });
       return domainErrorReply(error, submission);

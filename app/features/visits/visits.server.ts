@@ -13,8 +13,10 @@ const { visit, site, photo, reading } = schema;
 export type VisitRow = typeof visit.$inferSelect;
 type Who = Actor & Scope;
 
-const photoCount = sql<number>`(select count(*)::int from ${photo} where ${photo.visitId} = ${visit.id})`;
-const readingCount = sql<number>`(select count(*)::int from ${reading} where ${reading.visitId} = ${visit.id})`;
+// Qualified by hand: in a one-table select Drizzle writes bare column names, which inside the
+// subquery would name the photo's (or reading's) own columns.
+const photoCount = sql<number>`(select count(*)::int from "photo" p where p."visit_id" = "visit"."id")`;
+const readingCount = sql<number>`(select count(*)::int from "reading" r where r."visit_id" = "visit"."id")`;
 
 /** A site's visits, newest first, with how many photos and readings each holds. The caller has checked the site is in scope. */
 export function listVisits(siteId: string) {
@@ -78,7 +80,7 @@ export async function updateVisit(who: Who, visitId: string, siteId: string | un
       .where(eq(visit.id, visitId))
       .returning();
     const diff = changedFields(snapshot(current), snapshot(row));
-    if (diff.keys.length) await auditChange(tx, who, { action: "visit.updated", entity: "visit", entityId: visitId, siteId: row.siteId, before: diff.before, after: diff.after });
+    if (diff.keys.length) await auditChange(tx, who, { action: "visit.updated", entity: "visit", entityId: visitId, siteId: row.siteId, before: { visitedOn: current.visitedOn, ...diff.before }, after: { visitedOn: row.visitedOn, ...diff.after } });
     return row;
   });
 }

@@ -6,11 +6,11 @@ import { FormErrors } from "~/components/field";
 import { Card } from "~/components/panels";
 import { requireMember } from "~/features/auth/guard.server";
 import { scopeOf } from "~/features/sites/scope.server";
+import { AddReading } from "~/features/visits/add-reading";
 import { calibrationWarnings } from "~/features/visits/calibration";
 import { PhotoGrid } from "~/features/visits/photo-grid";
 import { PhotoUploader } from "~/features/visits/photo-uploader";
 import { listPhotos } from "~/features/visits/photos.server";
-import { ReadingForm } from "~/features/visits/reading-form";
 import { ReadingsImport } from "~/features/visits/readings-import";
 import { ReadingsTable } from "~/features/visits/readings-table";
 import { listReadings, siteSurfaces } from "~/features/visits/readings.server";
@@ -98,7 +98,7 @@ export default function VisitPage({ loaderData, actionData }: Route.ComponentPro
                 <h3 id="add-reading-title" className="mb-2 text-sm font-semibold text-ink-900">
                   Add a reading
                 </h3>
-                <ReadingForm intent="add-reading" formId="add-reading" surfaces={surfaces} submitLabel="Add reading" />
+                <AddReading surfaces={surfaces} />
               </section>
               <section aria-labelledby="import-readings-title" className="rounded-md border border-ink-200 p-3">
                 <h3 id="import-readings-title" className="mb-2 text-sm font-semibold text-ink-900">
