@@ -88,7 +88,7 @@ test("an engineer records a visit with a photo and readings, and finds it in His
   expect(bottom[2]).toBeGreaterThan(150);
   await page.locator(thumb).click();
   await expect(page.getByText("51.50343° N, 0.12500° W")).toBeVisible();
-  await expect(page.getByText("2026-03-14, 10:22 by the camera's clock")).toBeVisible();
+  await expect(page.getByText("14 Mar 2026, 10:22 by the camera's clock")).toBeVisible();
   await shot(page, info, "02-photo-page");
   await page.getByRole("link", { name: "Visit on 12 May 2026" }).click();
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { formatBytes, formatDensity, formatFrequency, formatMetres, formatNumber, formatReadingValue } from "./format";
+import { formatBytes, formatCameraTime, formatDensity, formatFrequency, formatMetres, formatNumber, formatReadingValue } from "./format";
 
 describe("formatNumber", () => {
   it("gives three significant figures without an exponent in the usual range", () => {
@@ -20,6 +20,7 @@ describe("reading texts", () => {
     expect(formatDensity(null)).toBe("—");
     expect([formatFrequency(null), formatFrequency(1900)]).toEqual(["broadband", "1900 MHz"]);
     expect(formatMetres(1.23456)).toBe("1.235");
+    expect(formatCameraTime(new Date("2026-03-14T10:22:05Z"))).toBe("14 Mar 2026, 10:22");
     expect([formatBytes(512), formatBytes(2048), formatBytes(3.5 * 1024 * 1024)]).toEqual(["512 B", "2 KB", "3.5 MB"]);
   });
 });

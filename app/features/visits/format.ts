@@ -36,6 +36,14 @@ export function formatFrequency(mhz: number | null): string {
   return mhz === null ? "broadband" : `${String(mhz)} MHz`;
 }
 
+/** "14 Mar 2026, 10:22": the camera clock's reading, stored as if UTC and shown without a zone. */
+export function formatCameraTime(value: Date | string): string {
+  const iso = new Date(value).toISOString();
+  const [y, m, d] = iso.slice(0, 10).split("-").map(Number);
+  const month = ["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"][m - 1];
+  return `${d} ${month} ${y}, ${iso.slice(11, 16)}`;
+}
+
 export function formatBytes(n: number): string {
   if (n < 1024) return `${n} B`;
   if (n < 1024 * 1024) return `${(n / 1024).toFixed(0)} KB`;

@@ -11,7 +11,7 @@ import { inputProps, selectProps } from "~/lib/conform";
 import { formatDensity } from "./format";
 import { parseReadingUnit, READING_UNITS, readingUnitLabels, toPowerDensity } from "./reading-units";
 import { readingFormSchema } from "./schemas";
-import { parseStandard, parseTier, STANDARD_IDS, standardLabels, TIERS, tierLabels } from "./standards";
+import { parseStandard, parseTier, STANDARD_IDS, standardShortLabels, TIERS, tierShortLabels } from "./standards";
 
 export type ReadingDefaults = {
   id?: string;
@@ -93,8 +93,8 @@ export function ReadingForm({ intent, formId, defaults, surfaces, submitLabel, o
         <SelectField label="Unit" options={READING_UNITS.map((u) => ({ value: u, label: readingUnitLabels[u] }))} {...selectProps(fields.unit)} />
         {percent ? (
           <>
-            <SelectField label="Standard" options={[{ value: "", label: "Choose…" }, ...STANDARD_IDS.map((s) => ({ value: s, label: standardLabels[s] }))]} {...selectProps(fields.standard)} />
-            <SelectField label="Tier" options={[{ value: "", label: "Choose…" }, ...TIERS.map((t) => ({ value: t, label: tierLabels[t] }))]} {...selectProps(fields.tier)} />
+            <SelectField label="Standard" options={[{ value: "", label: "Choose…" }, ...STANDARD_IDS.map((s) => ({ value: s, label: standardShortLabels[s] }))]} {...selectProps(fields.standard)} />
+            <SelectField label="Tier" options={[{ value: "", label: "Choose…" }, ...TIERS.map((t) => ({ value: t, label: tierShortLabels[t] }))]} {...selectProps(fields.tier)} />
           </>
         ) : null}
         <Field label="Frequency (MHz)" hint="empty: broadband" step="any" {...inputProps(fields.frequencyMHz, "number")} />

@@ -102,7 +102,7 @@ export function ReadingsImport({ visitId }: { visitId: string }) {
                 Fix the file and import it again, or store the {outcome.validCount} valid reading{outcome.validCount === 1 ? "" : "s"} only.
               </span>
               <Button type="button" tone="secondary" disabled={busy} onClick={() => void run(true)}>
-                Store the {outcome.validCount} valid only
+                Store the {outcome.validCount} valid reading{outcome.validCount === 1 ? "" : "s"} only
               </Button>
             </div>
           ) : null}

@@ -24,7 +24,8 @@ export type ReadingRowView = {
 };
 
 type Surface = { id: string; name: string };
-const headers = ["Label", "Surface", "x, y (m)", "Height (m)", "Reading", "Frequency", "Power density", "Notes"];
+// What was read and what it means first, so a narrow screen shows them before it scrolls.
+const headers = ["Label", "Reading", "Power density", "Frequency", "Surface", "x, y (m)", "Height (m)", "Notes"];
 
 function DeleteReading({ reading }: { reading: ReadingRowView }) {
   const fetcher = useFetcher();
@@ -94,16 +95,16 @@ export function ReadingsTable({ readings, surfaces, canEdit }: { readings: Readi
             ) : (
               <tr key={r.id}>
                 <td className="px-3 py-2 font-medium break-words text-ink-900">{r.label || "—"}</td>
+                <td className="px-3 py-2 whitespace-nowrap">{formatReadingValue(r)}</td>
+                <td className="px-3 py-2 whitespace-nowrap font-medium tabular-nums" title={r.powerDensityWm2 === null ? "A broadband % reading has no power density: the limit depends on frequency." : undefined}>
+                  {formatDensity(r.powerDensityWm2)}
+                </td>
+                <td className="px-3 py-2 whitespace-nowrap text-ink-600">{formatFrequency(r.frequencyMHz)}</td>
                 <td className="px-3 py-2 break-words text-ink-800">{r.surfaceName ?? <span className="text-ink-400">—</span>}</td>
                 <td className="px-3 py-2 whitespace-nowrap tabular-nums">
                   {formatMetres(r.x)}, {formatMetres(r.y)}
                 </td>
                 <td className="px-3 py-2 tabular-nums">{formatMetres(r.heightM)}</td>
-                <td className="px-3 py-2 whitespace-nowrap">{formatReadingValue(r)}</td>
-                <td className="px-3 py-2 whitespace-nowrap text-ink-600">{formatFrequency(r.frequencyMHz)}</td>
-                <td className="px-3 py-2 whitespace-nowrap font-medium tabular-nums" title={r.powerDensityWm2 === null ? "A broadband % reading has no power density: the limit depends on frequency." : undefined}>
-                  {formatDensity(r.powerDensityWm2)}
-                </td>
                 <td className="max-w-56 px-3 py-2 break-words text-ink-600">{r.notes}</td>
                 {canEdit ? (
                   <td className="px-3 py-2 whitespace-nowrap text-right">

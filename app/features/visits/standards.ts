@@ -12,6 +12,17 @@ export const standardLabels: Record<StandardId, string> = {
   "sc6-2015": "Safety Code 6 (2015)",
 };
 
+/** Short names for narrow controls. */
+export const standardShortLabels: Record<StandardId, string> = {
+  fcc: "FCC §1.1310",
+  "icnirp-2020": "ICNIRP 2020",
+  "icnirp-1998": "ICNIRP 1998",
+  "ieee-c95.1-2019": "IEEE C95.1-2019",
+  "sc6-2015": "SC6 (2015)",
+};
+
+export const tierShortLabels: Record<Tier, string> = { general: "General public", occupational: "Occupational" };
+
 export const tierLabels: Record<Tier, string> = {
   general: "general public / uncontrolled",
   occupational: "occupational / controlled",

@@ -43,7 +43,7 @@ export function VisitForm({ lastResult, defaults, submitLabel, cancelTo, intent 
           const i = instrument.getFieldset();
           return (
             <div key={instrument.key} className="grid gap-3 rounded-card border border-ink-200 bg-white p-3 sm:grid-cols-[2fr_1fr_11rem_auto] sm:items-end">
-              <Field label="Probe or meter" hint="Make and model" maxLength={100} {...inputProps(i.probe, "text")} />
+              <Field label="Probe or meter" placeholder="Make and model" maxLength={100} {...inputProps(i.probe, "text")} />
               <Field label="Serial" maxLength={60} {...inputProps(i.serial, "text")} />
               <Field label="Calibrated on" {...inputProps(i.calibrationDate, "date")} />
               <button {...form.remove.getButtonProps({ name: fields.instruments.name, index })} className={buttonClass("quiet", "px-2 py-2")}>

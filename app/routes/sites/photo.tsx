@@ -8,7 +8,7 @@ import { Field, FormErrors } from "~/components/field";
 import { Card } from "~/components/panels";
 import { requireMember } from "~/features/auth/guard.server";
 import { actorOf, scopeOf } from "~/features/sites/scope.server";
-import { formatBytes } from "~/features/visits/format";
+import { formatBytes, formatCameraTime } from "~/features/visits/format";
 import { formatPosition } from "~/features/visits/photo-exif";
 import { deletePhoto, findPhoto, updateCaption } from "~/features/visits/photos.server";
 import { captionSchema } from "~/features/visits/schemas";
@@ -105,7 +105,7 @@ export default function PhotoPage({ loaderData, actionData }: Route.ComponentPro
         <dl className="grid gap-x-6 gap-y-3 text-sm sm:grid-cols-2">
           <div>
             <dt className="font-medium text-ink-600">Taken</dt>
-            <dd className="mt-0.5 text-ink-900">{photo.takenAt ? `${new Date(photo.takenAt).toISOString().slice(0, 16).replace("T", ", ")} by the camera's clock` : "Not recorded in the file"}</dd>
+            <dd className="mt-0.5 text-ink-900">{photo.takenAt ? `${formatCameraTime(photo.takenAt)} by the camera's clock` : "Not recorded in the file"}</dd>
           </div>
           <div>
             <dt className="font-medium text-ink-600">Position (GPS)</dt>

@@ -37,6 +37,9 @@ export async function action({ request, params }: Route.ActionArgs) {
   return visitPageAction(member, params, await request.formData());
 }
 
+/** After a refused stale edit (409) the page reloads its data, so the table shows what the other person saved. */
+export const shouldRevalidate: Route.ShouldRevalidateFunction = ({ actionStatus, defaultShouldRevalidate }) => actionStatus === 409 || defaultShouldRevalidate;
+
 export default function VisitPage({ loaderData, actionData }: Route.ComponentProps) {
   const { visit, photos, readings, surfaces, warnings, canEdit } = loaderData;
   const [params] = useSearchParams();
@@ -67,7 +70,7 @@ export default function VisitPage({ loaderData, actionData }: Route.ComponentPro
         </div>
         {canEdit ? (
           <div className="flex gap-2">
-            <ButtonLink to="?edit">Edit details</ButtonLink>
+            <ButtonLink to="?edit">Edit visit</ButtonLink>
             <Button type="button" tone="danger" onClick={() => setConfirm(true)}>
               Delete visit
             </Button>
