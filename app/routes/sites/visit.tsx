@@ -1,5 +1,5 @@
 import { useState } from "react";
-import { Form, Link, useSearchParams } from "react-router";
+import { Form, Link, useSearchParams, type ShouldRevalidateFunction } from "react-router";
 import { Button, ButtonLink } from "~/components/button";
 import { Dialog } from "~/components/dialog";
 import { FormErrors } from "~/components/field";
@@ -38,7 +38,7 @@ export async function action({ request, params }: Route.ActionArgs) {
 }
 
 /** After a refused stale edit (409) the page reloads its data, so the table shows what the other person saved. */
-export const shouldRevalidate: Route.ShouldRevalidateFunction = ({ actionStatus, defaultShouldRevalidate }) => actionStatus === 409 || defaultShouldRevalidate;
+export const shouldRevalidate: ShouldRevalidateFunction = ({ actionStatus, defaultShouldRevalidate }) => actionStatus === 409 || defaultShouldRevalidate;
 
 export default function VisitPage({ loaderData, actionData }: Route.ComponentProps) {
   const { visit, photos, readings, surfaces, warnings, canEdit } = loaderData;
