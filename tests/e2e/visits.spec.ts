@@ -1,6 +1,7 @@
 // An engineer records a site visit: instruments (one out of calibration), a photo taken sideways
 // with GPS (seen upright), readings typed into the table and imported from a CSV (a bad file
 // first), all converted to power density, and finds it all in the site's History.
+import AxeBuilder from "@axe-core/playwright";
 import { expect, test, type Page } from "@playwright/test";
 import postgres from "postgres";
 import sharp from "sharp";
@@ -147,6 +148,8 @@ test("an engineer records a visit with a photo and readings, and finds it in His
   await expect(table.getByRole("row", { name: /C1/ })).toContainText("5.80 W/m²");
   await expect(table.getByRole("row", { name: /C3/ })).toContainText("0.942 W/m²"); // 376.73 × 0.05²
   await shot(page, info, "04-visit-1280");
+  const axe = await new AxeBuilder({ page }).analyze();
+  expect(axe.violations.filter((v) => v.impact === "serious" || v.impact === "critical").map((v) => `${v.id}: ${v.help}`)).toEqual([]);
 
   await page.setViewportSize({ width: 390, height: 844 });
   await page.reload();

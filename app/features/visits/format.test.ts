@@ -13,6 +13,7 @@ describe("reading texts", () => {
     expect(formatReadingValue({ value: 6.14, unit: "V/m", percentStandard: null, percentTier: null })).toBe("6.14 V/m");
     expect(formatReadingValue({ value: 580, unit: "uW/cm2", percentStandard: null, percentTier: null })).toBe("580 µW/cm²");
     expect(formatReadingValue({ value: 50, unit: "percent", percentStandard: "icnirp-2020", percentTier: "general" })).toBe("50 % of ICNIRP 2020, general");
+    expect(formatReadingValue({ value: 20, unit: "percent", percentStandard: "fcc", percentTier: "occupational" })).toBe("20 % of FCC §1.1310, occupational");
   });
 
   it("writes densities, frequencies, metres and sizes", () => {

@@ -1,7 +1,7 @@
 // Readings as people read them: three significant figures, no exponent in the usual range,
 // the unit as entered, and a % reading named with its standard and tier.
 import { readingUnitLabels, type ReadingUnit } from "./reading-units";
-import { standardLabels, type StandardId, type Tier } from "./standards";
+import { standardShortLabels, type StandardId, type Tier } from "./standards";
 
 /** 3 significant figures: 0.100, 5.80, 1230, 0.000123; an exponent only outside 1e-6…1e9. */
 export function formatNumber(n: number, significant = 3): string {
@@ -19,11 +19,11 @@ export function formatMetres(n: number): string {
 
 type ReadingLike = { value: number; unit: ReadingUnit | string; percentStandard: string | null; percentTier: string | null };
 
-/** "6.14 V/m", "580 µW/cm²", "50 % of ICNIRP 2020, general". */
+/** "6.14 V/m", "580 µW/cm²", "50 % of ICNIRP 2020, general", "20 % of FCC §1.1310, occupational". */
 export function formatReadingValue(r: ReadingLike): string {
   const value = String(r.value);
   if (r.unit !== "percent") return `${value} ${readingUnitLabels[r.unit as ReadingUnit] ?? r.unit}`;
-  const standard = standardLabels[r.percentStandard as StandardId] ?? r.percentStandard ?? "?";
+  const standard = standardShortLabels[r.percentStandard as StandardId] ?? r.percentStandard ?? "?";
   return `${value} % of ${standard}, ${(r.percentTier as Tier | null) ?? "?"}`;
 }
 

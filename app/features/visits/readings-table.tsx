@@ -95,7 +95,7 @@ export function ReadingsTable({ readings, surfaces, canEdit }: { readings: Readi
             ) : (
               <tr key={r.id}>
                 <td className="px-3 py-2 font-medium break-words text-ink-900">{r.label || "—"}</td>
-                <td className="px-3 py-2 whitespace-nowrap">{formatReadingValue(r)}</td>
+                <td className="min-w-28 px-3 py-2">{formatReadingValue(r)}</td>
                 <td className="px-3 py-2 whitespace-nowrap font-medium tabular-nums" title={r.powerDensityWm2 === null ? "A broadband % reading has no power density: the limit depends on frequency." : undefined}>
                   {formatDensity(r.powerDensityWm2)}
                 </td>
