@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { sniffImageType } from "./image-type";
+import { isHeifFamily, sniffImageType } from "./image-type";
 
 const bytes = (...parts: (number[] | string)[]) =>
   Uint8Array.from(parts.flatMap((p) => (typeof p === "string" ? [...p].map((c) => c.charCodeAt(0)) : p)));
@@ -18,6 +18,14 @@ describe("sniffImageType", () => {
     expect(sniffImageType(bytes("RIFF", [0x24, 0, 0, 0], "WEBPVP8 "))).toBe("image/webp");
     expect(sniffImageType(bytes("RIFF", [0x24, 0, 0, 0], "WAVEfmt "))).toBeNull();
     expect(sniffImageType(bytes("RIFF", [0x24, 0, 0, 0], "AVI LIST"))).toBeNull();
+  });
+
+  it("refuses HEIC and AVIF (ISO base-media files), and can tell them apart to say so", () => {
+    const heic = bytes([0, 0, 0, 0x18], "ftypheic", [0, 0, 0, 0], "mif1heic");
+    expect(sniffImageType(heic)).toBeNull();
+    expect(isHeifFamily(heic)).toBe(true);
+    expect(isHeifFamily(bytes([0, 0, 0, 0x1c], "ftypavif"))).toBe(true);
+    expect(isHeifFamily(bytes([0xff, 0xd8, 0xff, 0xe0], "JFIF"))).toBe(false);
   });
 
   it("refuses text, PDFs, GIFs, SVG, HTML and truncated signatures", () => {

@@ -21,4 +21,9 @@ export function sniffImageType(bytes: Uint8Array): ImageType | null {
   return null;
 }
 
+/** An ISO base-media file ("ftyp" box at byte 4): HEIC/HEIF or AVIF from phones, which browsers do not all show. */
+export function isHeifFamily(bytes: Uint8Array): boolean {
+  return startsWith(bytes, [0x66, 0x74, 0x79, 0x70], 4);
+}
+
 export const imageTypeLabels: Record<ImageType, string> = { "image/jpeg": "JPEG", "image/png": "PNG", "image/webp": "WebP" };

@@ -173,6 +173,16 @@ describe("POST /api/v1/visits/:id/readings (CSV)", () => {
     expect(got.body.readings.map((r: { powerDensityWm2: number }) => r.powerDensityWm2)).toEqual([5.8, expect.closeTo(10.009, 3)]);
   });
 
+  it("reads a Latin-1 file and a UTF-16 file from a spreadsheet program alike", async () => {
+    const visitId = (await newVisit()).body.visit.id;
+    const text = `${header}\nL1,Main roof,1,2,1.5,580,µW/cm²,,,,Ü\n`;
+    for (const body of [Buffer.from(text, "latin1"), Buffer.concat([Buffer.from([0xff, 0xfe]), Buffer.from(text, "utf16le")])]) {
+      const got = await callApi(readingsApi, "POST", `/api/v1/visits/${visitId}/readings`, { auth: eng(), params: { visitId }, body, contentType: "text/csv" });
+      expect(got.status).toBe(201);
+      expect(got.body.readings[0]).toMatchObject({ unit: "uW/cm2", powerDensityWm2: 5.8, notes: "Ü" });
+    }
+  });
+
   it("answers a bad file row by row (row, column, reason) and stores nothing", async () => {
     const visitId = (await newVisit()).body.visit.id;
     const csv = `${header}\nR1,Main roof,1,2,1.5,3,V/m,,,,\nR2,Main roof,1,2,1.5,three,V/m,,,,\nR3,Nowhere,1,2,1.5,3,V/m,,,,\n`;

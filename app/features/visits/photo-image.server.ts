@@ -2,7 +2,7 @@
 // thumbnail turned upright by its EXIF orientation, and the camera's time and GPS position.
 import exifReader from "exif-reader";
 import sharp, { type Metadata } from "sharp";
-import { imageTypeLabels, sniffImageType, type ImageType } from "~/lib/image-type";
+import { imageTypeLabels, isHeifFamily, sniffImageType, type ImageType } from "~/lib/image-type";
 import { DomainError } from "~/lib/domain-error";
 import { PHOTO_MAX_PIXELS, THUMB_MAX_PX } from "./limits";
 import { photoMetadataFromExif } from "./photo-exif";
@@ -23,6 +23,7 @@ export const notAnImage = () => new DomainError("Upload a JPEG, PNG or WebP phot
 
 export async function processPhoto(bytes: Buffer): Promise<ProcessedPhoto> {
   const mediaType = sniffImageType(bytes);
+  if (!mediaType && isHeifFamily(bytes)) throw new DomainError("This is a HEIC or AVIF photo, which not every browser shows. Export it as JPEG (or set the camera to save JPEG) and upload that.", 415, "photo");
   if (!mediaType) throw notAnImage();
   const options = { limitInputPixels: PHOTO_MAX_PIXELS, failOn: "error" as const };
   let metadata: Metadata;
