@@ -1,22 +1,18 @@
-import { getFormProps, useForm } from "@conform-to/react";
-import { parseWithZod } from "@conform-to/zod/v4";
 import { useState } from "react";
-import { data, Form, Link, useNavigation } from "react-router";
+import { Form, Link } from "react-router";
 import { Button } from "~/components/button";
 import { Dialog } from "~/components/dialog";
-import { Field, FormErrors } from "~/components/field";
+import { FormErrors } from "~/components/field";
 import { Card } from "~/components/panels";
 import { requireMember } from "~/features/auth/guard.server";
-import { actorOf, scopeOf } from "~/features/sites/scope.server";
+import { scopeOf } from "~/features/sites/scope.server";
+import { CaptionForm } from "~/features/visits/caption-form";
 import { formatBytes, formatCameraTime } from "~/features/visits/format";
 import { formatPosition } from "~/features/visits/photo-exif";
-import { deletePhoto, findPhoto, updateCaption } from "~/features/visits/photos.server";
-import { captionSchema } from "~/features/visits/schemas";
+import { photoPageAction } from "~/features/visits/photo-page-actions.server";
+import { findPhoto } from "~/features/visits/photos.server";
 import { findVisit } from "~/features/visits/visits.server";
-import { redirectWithFlash } from "~/infra/flash.server";
-import { inputProps } from "~/lib/conform";
 import { formatDate } from "~/lib/dates";
-import { DomainError, domainErrorReply } from "~/lib/domain-error";
 import { found } from "~/lib/responses.server";
 import { canEditInventory, inventoryEditors, staffRoles } from "~/lib/roles";
 import type { Route } from "./+types/photo";
@@ -33,44 +29,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 
 export async function action({ request, params }: Route.ActionArgs) {
   const member = await requireMember(request, { roles: inventoryEditors });
-  const formData = await request.formData();
-  const intent = formData.get("intent");
-  formData.delete("intent");
-  const where = { visitId: params.visitId, siteId: params.siteId };
-  const visitPath = `/sites/${params.siteId}/visits/${params.visitId}`;
-  if (intent === "delete-photo") {
-    try {
-      await deletePhoto(actorOf(member), params.photoId, where);
-    } catch (error) {
-      if (error instanceof DomainError) return data({ deleteError: error.message }, { status: error.status });
-      throw error;
-    }
-    return redirectWithFlash(visitPath, { kind: "success", message: "Photo deleted." });
-  }
-  const submission = parseWithZod(formData, { schema: captionSchema });
-  if (submission.status !== "success") return data(submission.reply(), { status: 400 });
-  if (!submission.value.version) return data(submission.reply({ formErrors: ["The form is missing the version it was opened at. Reload the page."] }), { status: 400 });
-  try {
-    await updateCaption(actorOf(member), params.photoId, { caption: submission.value.caption, version: submission.value.version }, where);
-    return redirectWithFlash(`${visitPath}/photos/${params.photoId}`, { kind: "success", message: "Caption saved." });
-  } catch (error) {
-    return domainErrorReply(error, submission);
-  }
-}
-
-function CaptionForm({ caption, version, lastResult }: { caption: string; version: number; lastResult: never }) {
-  const navigation = useNavigation();
-  const [form, fields] = useForm({ lastResult, defaultValue: { caption }, onValidate: ({ formData }) => parseWithZod(formData, { schema: captionSchema }), shouldValidate: "onSubmit" });
-  return (
-    <Form method="post" {...getFormProps(form)} className="flex flex-wrap items-end gap-3">
-      <FormErrors errors={form.errors} />
-      <input type="hidden" name="version" value={version} />
-      <div className="min-w-0 flex-1">
-        <Field label="Caption" maxLength={300} {...inputProps(fields.caption, "text")} />
-      </div>
-      <Button disabled={navigation.state === "submitting"}>Save caption</Button>
-    </Form>
-  );
+  return photoPageAction(member, params, await request.formData());
 }
 
 export default function PhotoPage({ loaderData, actionData }: Route.ComponentProps) {
@@ -128,7 +87,7 @@ export default function PhotoPage({ loaderData, actionData }: Route.ComponentPro
         </dl>
         {canEdit ? (
           <div className="mt-5 border-t border-ink-100 pt-4">
-            <CaptionForm key={photo.version} caption={photo.caption} version={photo.version} lastResult={captionReply as never} />
+            <CaptionForm key={photo.version} caption={photo.caption} version={photo.version} lastResult={captionReply} />
           </div>
         ) : null}
       </Card>
