@@ -8,13 +8,14 @@ export const DEFAULT_BODY_LIMIT = 64 * 1024;
 export const MiB = 1024 * 1024;
 
 /**
- * Larger limits, as React Router path patterns (the syntax of app/routes.ts).
- * Later issues add their routes here, for example
- *   { path: "/sites/:siteId/photos", limit: 10 * MiB },   // photo uploads
- *   { path: "/sites/:siteId/emitters/import", limit: 8 * MiB },   // CSV imports
+ * Larger limits, as React Router path patterns (the syntax of app/routes.ts). Each feature keeps
+ * its numbers in its own limits module; server/gate/limits.test.ts checks they agree.
  * @type {{ path: string; limit: number }[]}
  */
-export const largeBodyRoutes = [];
+export const largeBodyRoutes = [
+  { path: "/api/v1/visits/:visitId/photos", limit: 10 * MiB + 64 * 1024 }, // app/features/visits/limits.ts
+  { path: "/api/v1/visits/:visitId/readings", limit: 2 * MiB },
+];
 
 /**
  * The body limit for a request path, and whether the route streams the body itself.

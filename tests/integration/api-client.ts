@@ -20,7 +20,9 @@ export async function callApi(
     headers.set("content-type", "application/json");
     body = JSON.stringify(options.json);
   } else if (options.contentType) headers.set("content-type", options.contentType);
-  const request = new Request(new URL(path, env.APP_URL), { method, headers, body });
+  // A streamed body (a generated upload) needs half-duplex mode in Node's fetch.
+  const duplex = body instanceof ReadableStream ? { duplex: "half" } : {};
+  const request = new Request(new URL(path, env.APP_URL), { method, headers, body, ...duplex } as RequestInit);
   const handler = method === "GET" ? mod.loader : mod.action;
   if (!handler) throw new Error(`the route module has no ${method === "GET" ? "loader" : "action"}`);
   let result: unknown;

@@ -12,7 +12,7 @@ const modules: Record<string, Record<string, unknown>> = Object.fromEntries(
 );
 
 type Actor = "anonymous" | Role;
-type Expect = "ok" | "sign-in" | "forbidden" | "home" | "unauthorized" | "not-found" | "signed-out" | "bad-request" | "conflict";
+type Expect = "ok" | "sign-in" | "forbidden" | "home" | "unauthorized" | "not-found" | "signed-out" | "bad-request" | "conflict" | "unsupported";
 type Handler = (args: { request: Request; params: Record<string, string>; context: unknown }) => unknown;
 type Case = {
   file: string;
@@ -38,6 +38,8 @@ let org: Org;
 let invitationId = "";
 let clientId = "";
 let siteId = "";
+let visitId = "";
+let photoId = "";
 
 
 const cases: Case[] = [
@@ -96,6 +98,20 @@ const cases: Case[] = [
   { file: "routes/api/v1/site.ts", method: "loader", path: () => `/api/v1/sites/${siteId}`, params: () => ({ siteId }), expect: apiRoles(staffRoles, "ok") },
   { file: "routes/api/v1/site.ts", method: "action", path: () => `/api/v1/sites/${siteId}`, method2: "PATCH", json: {}, params: () => ({ siteId }), expect: apiRoles(inventoryEditors, "bad-request") },
   { file: "routes/api/v1/site-history.ts", method: "loader", path: () => `/api/v1/sites/${siteId}/history`, params: () => ({ siteId }), expect: apiRoles(staffRoles, "ok") },
+  { file: "routes/sites/visits.tsx", method: "loader", path: () => `/sites/${siteId}/visits`, params: () => ({ siteId }), expect: rolesIn(staffRoles, "ok") },
+  { file: "routes/sites/visit-new.tsx", method: "loader", path: () => `/sites/${siteId}/visits/new`, params: () => ({ siteId }), expect: rolesIn(inventoryEditors, "ok") },
+  { file: "routes/sites/visit-new.tsx", method: "action", path: () => `/sites/${siteId}/visits/new`, form: {}, params: () => ({ siteId }), expect: rolesIn(inventoryEditors, "bad-request") },
+  { file: "routes/sites/visit.tsx", method: "loader", path: () => `/sites/${siteId}/visits/${visitId}`, params: () => ({ siteId, visitId }), expect: rolesIn(staffRoles, "ok") },
+  { file: "routes/sites/visit.tsx", method: "action", path: () => `/sites/${siteId}/visits/${visitId}`, form: {}, params: () => ({ siteId, visitId }), expect: rolesIn(inventoryEditors, "bad-request") },
+  { file: "routes/sites/photo.tsx", method: "loader", path: () => `/sites/${siteId}/visits/${visitId}/photos/${photoId}`, params: () => ({ siteId, visitId, photoId }), expect: rolesIn(staffRoles, "ok") },
+  { file: "routes/sites/photo.tsx", method: "action", path: () => `/sites/${siteId}/visits/${visitId}/photos/${photoId}`, form: {}, params: () => ({ siteId, visitId, photoId }), expect: rolesIn(inventoryEditors, "bad-request") },
+  { file: "routes/api/v1/site-visits.ts", method: "loader", path: () => `/api/v1/sites/${siteId}/visits`, params: () => ({ siteId }), expect: apiRoles(staffRoles, "ok") },
+  { file: "routes/api/v1/site-visits.ts", method: "action", path: () => `/api/v1/sites/${siteId}/visits`, json: {}, params: () => ({ siteId }), expect: apiRoles(inventoryEditors, "bad-request") },
+  { file: "routes/api/v1/visit.ts", method: "loader", path: () => `/api/v1/visits/${visitId}`, params: () => ({ visitId }), expect: apiRoles(staffRoles, "ok") },
+  // A JSON body is not a multipart upload: 415 once the guard lets the member through.
+  { file: "routes/api/v1/visit-photos.ts", method: "action", path: () => `/api/v1/visits/${visitId}/photos`, json: {}, params: () => ({ visitId }), expect: apiRoles(inventoryEditors, "unsupported") },
+  { file: "routes/api/v1/visit-readings.ts", method: "loader", path: () => `/api/v1/visits/${visitId}/readings`, params: () => ({ visitId }), expect: apiRoles(staffRoles, "ok") },
+  { file: "routes/api/v1/visit-readings.ts", method: "action", path: () => `/api/v1/visits/${visitId}/readings`, json: {}, params: () => ({ visitId }), expect: apiRoles(inventoryEditors, "bad-request") },
   { file: "routes/api/v1/clients.ts", method: "loader", path: () => "/api/v1/clients", expect: apiRoles(staffRoles, "ok") },
   { file: "routes/api/v1/clients.ts", method: "action", path: () => "/api/v1/clients", json: {}, expect: apiRoles(inventoryEditors, "bad-request") },
   { file: "routes/api/v1/tokens.ts", method: "loader", path: () => "/api/v1/tokens", expect: apiRoles(roles, "ok") },
@@ -120,6 +136,7 @@ function matches(expected: Expect, got: { status: number; location?: string }) {
     case "not-found": return got.status === 404;
     case "bad-request": return got.status === 400;
     case "conflict": return got.status === 409;
+    case "unsupported": return got.status === 415;
   }
 }
 
@@ -129,6 +146,12 @@ beforeAll(async () => {
   clientId = client.id;
   const [site] = await db.insert(schema.site).values({ organizationId: org.id, clientId, name: "Route-table site", kind: "rooftop" }).returning();
   siteId = site.id;
+  const [visit] = await db.insert(schema.visit).values({ organizationId: org.id, siteId, visitedOn: "2026-05-01" }).returning();
+  visitId = visit.id;
+  const file = { organizationId: org.id, purpose: "photo", fileName: "route-table.png", mediaType: "image/png", byteSize: 1, sha256: "0", bytes: Buffer.from([0]) };
+  const [original, thumb] = await db.insert(schema.storedFile).values([file, { ...file, purpose: "photo-thumbnail" }]).returning();
+  const [photo] = await db.insert(schema.photo).values({ organizationId: org.id, visitId, fileId: original.id, thumbFileId: thumb.id, widthPx: 1, heightPx: 1 }).returning();
+  photoId = photo.id;
   invitationId = randomUUID();
   await db.insert(schema.invitation).values({
     id: invitationId, organizationId: org.id, email: `invitee-${invitationId}@fixture.test`, role: "engineer",

@@ -26,7 +26,7 @@ export function describeAction(action: string, entity: string, label?: string | 
 /** The label people know a record by, from its fields. */
 export function recordLabel(fields: Record<string, unknown> | null | undefined) {
   if (!fields) return null;
-  for (const key of ["label", "name", "visitedOn", "fileName"]) {
+  for (const key of ["label", "name", "visitedOn", "fileName", "probe"]) {
     const value = fields[key];
     if (typeof value === "string" && value) return value;
   }
@@ -88,6 +88,16 @@ const fieldLabels: Record<string, string> = {
   value: "Value",
   unit: "Unit",
   caption: "Caption",
+  surfaceId: "Surface",
+  percentStandard: "Standard (for %)",
+  percentTier: "Tier (for %)",
+  powerDensityWm2: "Power density (W/m²)",
+  takenAt: "Taken (camera clock)",
+  widthPx: "Width (px)",
+  heightPx: "Height (px)",
+  fileName: "File",
+  photoCount: "Photos",
+  readingCount: "Readings",
 };
 
 export function fieldLabel(key: string) {

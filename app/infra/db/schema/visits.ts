@@ -1,7 +1,7 @@
 // Site visits (surveys): who, when, conditions, instruments; their photos and field readings.
 import { date, doublePrecision, index, integer, jsonb, pgTable, text, timestamp } from "drizzle-orm/pg-core";
 import { organization } from "./auth";
-import { createdAt, id, updatedAt } from "./columns";
+import { createdAt, id, updatedAt, version } from "./columns";
 import { storedFile } from "./files";
 import { site, surface } from "./sites";
 
@@ -18,6 +18,7 @@ export const visit = pgTable(
     conditions: text("conditions").notNull().default(""),
     instruments: jsonb("instruments").$type<Instrument[]>().notNull().default([]),
     notes: text("notes").notNull().default(""),
+    version: version(),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
@@ -38,6 +39,7 @@ export const photo = pgTable(
     takenAt: timestamp("taken_at", { withTimezone: true }),
     latitude: doublePrecision("latitude"),
     longitude: doublePrecision("longitude"),
+    version: version(),
     createdAt: createdAt(),
   },
   (t) => [index("photo_visit_idx").on(t.visitId)],
@@ -53,6 +55,8 @@ export const reading = pgTable(
     organizationId: text("organization_id").notNull().references(() => organization.id, { onDelete: "cascade" }),
     visitId: text("visit_id").notNull().references(() => visit.id, { onDelete: "cascade" }),
     surfaceId: text("surface_id").references(() => surface.id, { onDelete: "set null" }),
+    /** Order within the visit, as entered or imported. */
+    position: integer("position").notNull().default(0),
     label: text("label").notNull().default(""),
     x: doublePrecision("x").notNull(),
     y: doublePrecision("y").notNull(),
@@ -66,7 +70,8 @@ export const reading = pgTable(
     frequencyMHz: doublePrecision("frequency_mhz"),
     powerDensityWm2: doublePrecision("power_density_wm2"),
     notes: text("notes").notNull().default(""),
+    version: version(),
     createdAt: createdAt(),
   },
-  (t) => [index("reading_visit_idx").on(t.visitId)],
+  (t) => [index("reading_visit_idx").on(t.visitId, t.position)],
 );
