@@ -3,6 +3,9 @@
 import { execFileSync } from "node:child_process";
 import { eq, sql } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
+import { evaluateSite } from "~/features/exposure/evaluate-site";
+import { loadSiteInventory } from "~/features/exposure/inventory.server";
+import { optionsSchema } from "~/features/exposure/options";
 import { db, schema } from "~/infra/db.server";
 
 const demo = [
@@ -82,5 +85,14 @@ describe("demo inventory", () => {
     expect(readings.length).toBeGreaterThanOrEqual(5);
     const patterns = await db.select().from(schema.antennaPattern).where(eq(schema.antennaPattern.organizationId, await demoOrgId()));
     expect(patterns.filter((p) => p.kind === "tabulated")).toHaveLength(2);
+  });
+
+  it("has part of the rooftop's main roof above the general-population limit, averaged over 0–2 m", async () => {
+    const [rooftop] = await db.select().from(schema.site).where(eq(schema.site.kind, "rooftop"));
+    const inventory = await loadSiteInventory(rooftop.organizationId, rooftop.id);
+    const site = evaluateSite(inventory, optionsSchema.parse({ standard: "fcc", tier: "general", gridStepM: 0.5 }));
+    const main = site.surfaces.find((s) => s.name === "Main roof")!;
+    expect(main.areas.overGeneralM2).toBeGreaterThan(5);
+    expect(main.areas.overGeneralM2).toBeLessThan(main.areas.totalM2 / 10);
   });
 });
