@@ -5,7 +5,7 @@ import { DateText } from "~/components/date-text";
 import { EmptyState } from "~/components/panels";
 import { isRole, roleLabels } from "~/lib/roles";
 
-export type InvitationRow = { id: string; email: string; role: string; expiresAt: Date | string };
+export type InvitationRow = { id: string; email: string; role: string; expiresAt: Date | string; clientId?: string | null; clientName?: string | null };
 
 /** A stored role as people read it; an unknown value is shown as stored. */
 export const invitationRoleLabel = (role: string) => (isRole(role) ? roleLabels[role] : role);
@@ -19,7 +19,8 @@ export function InvitationList({ invitations }: { invitations: InvitationRow[] }
           <span className="min-w-0">
             <span className="block font-medium [overflow-wrap:anywhere]">{i.email}</span>
             <span className="block text-sm text-graphite-600">
-              {invitationRoleLabel(i.role)} · until <DateText value={i.expiresAt} />
+              {invitationRoleLabel(i.role)}
+              {i.clientName ? <> for {i.clientName}</> : null} · until <DateText value={i.expiresAt} />
             </span>
           </span>
           <span className="flex gap-3">
@@ -27,6 +28,7 @@ export function InvitationList({ invitations }: { invitations: InvitationRow[] }
               <input type="hidden" name="intent" value="invite" />
               <input type="hidden" name="email" value={i.email} />
               <input type="hidden" name="role" value={i.role} />
+              {i.clientId ? <input type="hidden" name="clientId" value={i.clientId} /> : null}
               <Button tone="quiet" size="sm" className="px-0" aria-label={`Send the invitation to ${i.email} again`}>
                 Send again
               </Button>

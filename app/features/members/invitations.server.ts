@@ -16,8 +16,10 @@ const INVITATION_DAYS = 7;
 
 export async function listPendingInvitations(organizationId: string) {
   return db
-    .select({ id: invitation.id, email: invitation.email, role: invitation.role, expiresAt: invitation.expiresAt })
+    .select({ id: invitation.id, email: invitation.email, role: invitation.role, expiresAt: invitation.expiresAt, clientId: schema.clientInvitation.clientId, clientName: schema.client.name })
     .from(invitation)
+    .leftJoin(schema.clientInvitation, eq(schema.clientInvitation.invitationId, invitation.id))
+    .leftJoin(schema.client, eq(schema.client.id, schema.clientInvitation.clientId))
     .where(and(eq(invitation.organizationId, organizationId), eq(invitation.status, "pending"), gt(invitation.expiresAt, new Date())))
     .orderBy(asc(invitation.email));
 }
@@ -36,8 +38,14 @@ export async function invitationsFor(email: string) {
  * link then says a newer one replaced it). The mail goes out inside the transaction: if it
  * can't be sent, no invitation is left behind.
  */
-export async function inviteMember(actor: Actor & { inviterName: string; organizationName: string }, email: string, role: Role) {
+export async function inviteMember(
+  actor: Actor & { inviterName: string; organizationName: string },
+  email: string,
+  role: Role,
+  binding: { clientId?: string | null; contactId?: string | null } = {},
+) {
   return db.transaction(async (tx) => {
+    const clientName = role === "client" ? await bindableClient(tx, actor.organizationId, binding.clientId) : null;
     const [already] = await tx
       .select({ id: member.id })
       .from(member)
@@ -51,9 +59,12 @@ export async function inviteMember(actor: Actor & { inviterName: string; organiz
     const id = randomUUID();
     const expiresAt = new Date(Date.now() + INVITATION_DAYS * 86_400_000);
     await tx.insert(invitation).values({ id, organizationId: actor.organizationId, email, role, status: "pending", expiresAt, inviterId: actor.userId });
-    await audit(tx, actor, "invitation.created", "invitation", id, { email, role });
+    if (clientName) await tx.insert(schema.clientInvitation).values({ invitationId: id, clientId: binding.clientId!, contactId: binding.contactId ?? null });
+    await audit(tx, actor, "invitation.created", "invitation", id, { email, role, ...(clientName ? { clientId: binding.clientId, client: clientName } : {}) });
     const mail = linkMail(email, `Join ${actor.organizationName} on Isotrope`, [
-      `${actor.inviterName} invites you to ${actor.organizationName} on Isotrope as ${roleLabels[role]}.`,
+      clientName
+        ? `${actor.inviterName} invites you to see ${clientName}'s sites and documents from ${actor.organizationName} on Isotrope.`
+        : `${actor.inviterName} invites you to ${actor.organizationName} on Isotrope as ${roleLabels[role]}.`,
       `The link works for ${INVITATION_DAYS} days. It replaces any earlier invitation from ${actor.organizationName}.`,
     ], { label: "Accept the invitation", url: `${env.APP_URL}/invite/${id}` });
     try {
@@ -63,6 +74,14 @@ export async function inviteMember(actor: Actor & { inviterName: string; organiz
     }
     return id;
   });
+}
+
+/** The client a `client` invitation binds to: required, and of the inviting organisation. */
+async function bindableClient(tx: Tx, organizationId: string, clientId: string | null | undefined) {
+  if (!clientId) throw new DomainError("Choose the client this person may see.", 400, "clientId");
+  const [row] = await tx.select({ name: schema.client.name }).from(schema.client).where(and(eq(schema.client.id, clientId), eq(schema.client.organizationId, organizationId)));
+  if (!row) throw new DomainError("No such client in your organisation.", 400, "clientId");
+  return row.name;
 }
 
 export async function cancelInvitation(actor: Actor, invitationId: string) {
@@ -105,6 +124,9 @@ async function consumeInvitation(tx: Tx, invitationId: string, userId: string, e
   if (dup) throw new DomainError("You are already a member of this organisation.", 409);
   const memberId = randomUUID();
   await tx.insert(member).values({ id: memberId, organizationId: inv.organizationId, userId, role: inv.role, openedAt: new Date() });
+  // A client member sees only the client its invitation names.
+  const [binding] = await tx.select().from(schema.clientInvitation).where(eq(schema.clientInvitation.invitationId, inv.id));
+  if (binding) await tx.insert(schema.clientMember).values({ memberId, clientId: binding.clientId });
   await audit(tx, { organizationId: inv.organizationId, userId }, "invitation.accepted", "member", memberId, { invitationId, role: inv.role });
   return inv.organizationId;
 }

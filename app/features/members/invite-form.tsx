@@ -11,7 +11,7 @@ import { invitationRoleLabel, type InvitationRow } from "./invitation-list";
 import { roleOptions } from "./role-options";
 import { inviteSchema } from "./schemas";
 
-export function InviteForm({ lastResult, invitations }: { lastResult?: SubmissionResult<string[]>; invitations: InvitationRow[] }) {
+export function InviteForm({ lastResult, invitations, clients }: { lastResult?: SubmissionResult<string[]>; invitations: InvitationRow[]; clients: { id: string; name: string }[] }) {
   const [form, fields] = useForm({
     id: "invite",
     lastResult,
@@ -41,6 +41,17 @@ export function InviteForm({ lastResult, invitations }: { lastResult?: Submissio
         options={roleOptions}
         hint={waiting ? `${waiting.email} already has an invitation waiting, as ${invitationRoleLabel(waiting.role)}. Sending replaces it.` : undefined}
       />
+      {role === "client" ? (
+        <SelectField
+          label="Client"
+          id={fields.clientId.id}
+          name={fields.clientId.name}
+          defaultValue=""
+          errors={fields.clientId.errors}
+          options={[{ value: "", label: clients.length ? "Choose the client…" : "No clients recorded yet" }, ...clients.map((c) => ({ value: c.id, label: c.name }))]}
+          hint="A client member sees only this client's sites and issued documents."
+        />
+      ) : null}
       <Button>Send invitation</Button>
     </Form>
   );

@@ -9,7 +9,7 @@ import { Dialog } from "~/components/dialog";
 import { TableShell } from "~/components/table-shell";
 import { roleOptions } from "./role-options";
 
-export type MemberRow = { id: string; role: string; joinedAt: Date | string; userId: string; name: string; email: string };
+export type MemberRow = { id: string; role: string; joinedAt: Date | string; userId: string; name: string; email: string; clientName?: string | null };
 
 const column = createColumnHelper<MemberRow>();
 
@@ -62,7 +62,18 @@ export function MemberTable({ members, myUserId }: { members: MemberRow[]; myUse
   const columns = [
     column.accessor("name", { header: "Name", cell: (c) => <span className="font-medium">{c.getValue()}</span> }),
     column.accessor("email", { header: "E-mail" }),
-    column.display({ id: "role", header: "Role", cell: (c) => <RoleCell row={c.row.original} /> }),
+    column.display({
+      id: "role",
+      header: "Role",
+      cell: (c) => (
+        <>
+          <RoleCell row={c.row.original} />
+          {c.row.original.role === "client" ? (
+            <span className="mt-1 block text-sm text-graphite-600">{c.row.original.clientName ? `Sees ${c.row.original.clientName}` : "Bound to no client: sees nothing"}</span>
+          ) : null}
+        </>
+      ),
+    }),
     column.accessor("joinedAt", { header: "Joined", cell: (c) => <DateText value={c.getValue()} figures /> }),
     column.display({
       id: "remove",

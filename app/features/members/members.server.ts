@@ -9,9 +9,11 @@ const { member, invitation, user } = schema;
 
 export async function listMembers(organizationId: string) {
   return db
-    .select({ id: member.id, role: member.role, joinedAt: member.createdAt, userId: user.id, name: user.name, email: user.email })
+    .select({ id: member.id, role: member.role, joinedAt: member.createdAt, userId: user.id, name: user.name, email: user.email, clientName: schema.client.name })
     .from(member)
     .innerJoin(user, eq(user.id, member.userId))
+    .leftJoin(schema.clientMember, eq(schema.clientMember.memberId, member.id))
+    .leftJoin(schema.client, eq(schema.client.id, schema.clientMember.clientId))
     .where(eq(member.organizationId, organizationId))
     .orderBy(asc(user.name));
 }

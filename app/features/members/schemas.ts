@@ -9,11 +9,15 @@ export const organizationSchema = z.object({
   name: shortText(ORGANIZATION_NAME_MAX, "Name your consultancy.", 2),
 });
 
-export const inviteSchema = z.object({
-  intent: z.literal("invite"),
-  email: emailAddress("Enter the e-mail address of the person you are inviting."),
-  role: z.enum(roles, { error: "Pick a role." }),
-});
+export const inviteSchema = z
+  .object({
+    intent: z.literal("invite"),
+    email: emailAddress("Enter the e-mail address of the person you are inviting."),
+    role: z.enum(roles, { error: "Pick a role." }),
+    /** For the client role: the client whose sites and documents this person may see. */
+    clientId: identifier().optional(),
+  })
+  .refine((v) => v.role !== "client" || Boolean(v.clientId), { message: "Choose the client this person may see.", path: ["clientId"] });
 
 export const changeRoleSchema = z.object({
   intent: z.literal("change-role"),

@@ -14,7 +14,8 @@ import { actorOf, scopeOf } from "~/features/sites/scope.server";
 import { listSites } from "~/features/sites/sites.server";
 import { redirectWithFlash } from "~/infra/flash.server";
 import { DomainError, domainErrorReply } from "~/lib/domain-error";
-import { found } from "~/lib/responses.server";
+import { forbidden, found } from "~/lib/responses.server";
+import { inviteClientContact } from "~/features/clients/invite-contact.server";
 import { canEditInventory, inventoryEditors, staffRoles } from "~/lib/roles";
 import type { Route } from "./+types/client";
 
@@ -25,17 +26,27 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   const scope = scopeOf(member);
   const client = found(await findClient(scope, params.clientId), "No such client in your organisation.");
   const { sites, total } = await listSites(scope, { page: 1, pageSize: 100, q: "", clientId: client.id, sort: "name", dir: "asc" });
-  return { client, sites, siteTotal: total, canEdit: canEditInventory(member.role) };
+  return { client, sites, siteTotal: total, canEdit: canEditInventory(member.role), canInvite: member.role === "owner" };
 }
 
 export async function action({ request, params, context }: Route.ActionArgs) {
   const member = await requireMember({ request, context }, { roles: inventoryEditors });
   const formData = await readFormData(request);
+  if (formData.get("intent") === "invite-contact") {
+    if (member.role !== "owner") throw forbidden("Only the organisation's owner invites people.");
+    try {
+      const contact = await inviteClientContact({ organizationId: member.organizationId, userId: member.user.id, inviterName: member.user.name, organizationName: member.organizationName }, params.clientId, String(formData.get("contactId") ?? ""));
+      return redirectWithFlash(`/clients/${params.clientId}`, { kind: "success", message: `Invitation sent to ${contact.email}. They will see this client's sites and issued documents only.` });
+    } catch (error) {
+      if (error instanceof DomainError) return data({ refusal: error.message }, { status: error.status });
+      throw error;
+    }
+  }
   if (formData.get("intent") === "delete") {
     try {
       await deleteClient(actorOf(member), params.clientId);
     } catch (error) {
-      if (error instanceof DomainError) return data({ deleteError: error.message }, { status: error.status });
+      if (error instanceof DomainError) return data({ refusal: error.message }, { status: error.status });
       throw error;
     }
     return redirectWithFlash("/clients", { kind: "success", message: "Client deleted." });
@@ -53,17 +64,17 @@ export async function action({ request, params, context }: Route.ActionArgs) {
 }
 
 export default function ClientPage({ loaderData, actionData }: Route.ComponentProps) {
-  const { client, sites, siteTotal, canEdit } = loaderData;
+  const { client, sites, siteTotal, canEdit, canInvite } = loaderData;
   const [params] = useSearchParams();
   const [confirm, setConfirm] = useState(false);
-  const editing = canEdit && (params.has("edit") || (actionData && !("deleteError" in actionData)));
-  const deleteError = actionData && "deleteError" in actionData ? actionData.deleteError : null;
+  const editing = canEdit && (params.has("edit") || (actionData && !("refusal" in actionData)));
+  const refusal = actionData && "refusal" in actionData ? actionData.refusal : null;
   if (editing) {
     return (
       <>
         <PageHeader title={`Edit ${client.name}`} />
         <ClientForm
-          lastResult={actionData && !("deleteError" in actionData) ? actionData : undefined}
+          lastResult={actionData && !("refusal" in actionData) ? actionData : undefined}
           defaults={{ ...client, contacts: client.contacts.map((c) => ({ id: c.id, name: c.name, email: c.email, phone: c.phone, role: c.role })) }}
           submitLabel="Save client"
           cancelTo={`/clients/${client.id}`}
@@ -91,7 +102,7 @@ export default function ClientPage({ loaderData, actionData }: Route.ComponentPr
           ) : null
         }
       />
-      <FormErrors errors={deleteError ? [deleteError] : null} />
+      <FormErrors errors={refusal ? [refusal] : null} />
       <div className="grid gap-5 md:grid-cols-2">
         <Card title="Billing address">
           <p className="text-sm whitespace-pre-line break-words text-ink-700">{client.billingAddress || "None recorded."}</p>
@@ -114,6 +125,15 @@ export default function ClientPage({ loaderData, actionData }: Route.ComponentPr
                     {c.role ? <span className="font-normal text-graphite-600"> · {c.role}</span> : null}
                   </span>
                   <span className="block break-words text-graphite-600">{[c.email, c.phone].filter(Boolean).join(" · ") || "No e-mail or phone"}</span>
+                  {canInvite && c.email ? (
+                    <Form method="post" className="mt-1">
+                      <input type="hidden" name="intent" value="invite-contact" />
+                      <input type="hidden" name="contactId" value={c.id} />
+                      <Button tone="quiet" size="sm" className="px-0" aria-label={`Invite ${c.name} to see this client's sites`}>
+                        Invite to the client portal
+                      </Button>
+                    </Form>
+                  ) : null}
                 </li>
               ))}
             </ul>

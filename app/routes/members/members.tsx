@@ -11,6 +11,8 @@ import { cancelInvitation, inviteMember, listPendingInvitations } from "~/featur
 import { changeRole, listMembers, removeMember } from "~/features/members/members.server";
 import { domainErrorReply } from "~/lib/domain-error";
 import { requireMember } from "~/features/auth/guard.server";
+import { clientOptions } from "~/features/clients/clients.server";
+import { scopeOf } from "~/features/sites/scope.server";
 import { roleLabels } from "~/lib/roles";
 import type { Route } from "./+types/members";
 
@@ -18,8 +20,8 @@ export const meta: Route.MetaFunction = () => [{ title: "Members · Isotrope" }]
 
 export async function loader(args: Route.LoaderArgs) {
   const me = await requireMember(args, { roles: ["owner"] });
-  const [members, invitations] = await Promise.all([listMembers(me.organizationId), listPendingInvitations(me.organizationId)]);
-  return { members, invitations, myUserId: me.user.id };
+  const [members, invitations, clients] = await Promise.all([listMembers(me.organizationId), listPendingInvitations(me.organizationId), clientOptions(scopeOf(me))]);
+  return { members, invitations, clients, myUserId: me.user.id };
 }
 
 export async function action({ request, context }: Route.ActionArgs) {
@@ -31,7 +33,7 @@ export async function action({ request, context }: Route.ActionArgs) {
   try {
     switch (value.intent) {
       case "invite":
-        await inviteMember({ ...actor, inviterName: me.user.name, organizationName: me.organizationName }, value.email, value.role);
+        await inviteMember({ ...actor, inviterName: me.user.name, organizationName: me.organizationName }, value.email, value.role, { clientId: value.clientId });
         return redirectWithFlash("/members", { kind: "success", message: `Invitation sent to ${value.email}.` });
       case "change-role":
         await changeRole(actor, value.memberId, value.role);
@@ -49,7 +51,7 @@ export async function action({ request, context }: Route.ActionArgs) {
 }
 
 export default function Members({ loaderData }: Route.ComponentProps) {
-  const { members, invitations, myUserId } = loaderData;
+  const { members, invitations, clients, myUserId } = loaderData;
   const lastResult = useActionData<typeof action>();
   const intent = lastResult?.initialValue?.intent;
   const otherError = lastResult && intent !== "invite" ? lastResult.error?.[""] : null;
@@ -61,7 +63,7 @@ export default function Members({ loaderData }: Route.ComponentProps) {
         <MemberTable members={members} myUserId={myUserId} />
         <div className="grid gap-6 md:grid-cols-2">
           <Card title="Invite someone">
-            <InviteForm key={invitations.map((i) => i.id).join()} lastResult={intent === "invite" ? lastResult : undefined} invitations={invitations} />
+            <InviteForm key={invitations.map((i) => i.id).join()} lastResult={intent === "invite" ? lastResult : undefined} invitations={invitations} clients={clients} />
           </Card>
           <Card title="Invitations waiting">
             <InvitationList invitations={invitations} />
