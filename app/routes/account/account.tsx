@@ -4,7 +4,10 @@ import { data, Form } from "react-router";
 import { callAuth, cookiesOf } from "~/features/auth/call.server";
 import { authMessage } from "~/features/auth/auth-messages";
 import { membershipsOf, switchOrganization } from "~/features/members/organizations.server";
-import { domainErrorReply } from "~/lib/domain-error";
+import { DomainError, domainErrorReply } from "~/lib/domain-error";
+import { TokenPanel } from "~/features/auth/token-panel";
+import { tokenCreateSchema } from "~/features/auth/token-schemas";
+import { createToken, listTokens, revokeToken } from "~/features/auth/tokens.server";
 import { Button } from "~/components/button";
 import { Field, FormErrors } from "~/components/field";
 import { Card, PageHeader } from "~/components/panels";
@@ -21,13 +24,31 @@ export const meta: Route.MetaFunction = () => [{ title: "Account · Isotrope" }]
 export async function loader(args: Route.LoaderArgs) {
   const me = await requireMember(args);
   const others = (await membershipsOf(me.user.id)).filter((m) => m.organizationId !== me.organizationId);
-  return { name: me.user.name, email: me.user.email, role: me.role, organizationName: me.organizationName, others };
+  const tokens = await listTokens(me.memberId);
+  return { name: me.user.name, email: me.user.email, role: me.role, organizationName: me.organizationName, others, tokens };
 }
 
 export async function action({ request, context }: Route.ActionArgs) {
   const me = await requireMember({ request, context });
   const formData = await readFormData(request);
-  if (formData.get("intent") === "switch-organization") {
+  const intent = formData.get("intent");
+  if (intent === "create-token" || intent === "revoke-token") {
+    const who = { organizationId: me.organizationId, userId: me.user.id, memberId: me.memberId };
+    try {
+      if (intent === "revoke-token") {
+        await revokeToken(who, String(formData.get("tokenId") ?? ""));
+        return { revoked: true };
+      }
+      const parsed = tokenCreateSchema.safeParse({ name: formData.get("name") ?? "" });
+      if (!parsed.success) return data({ tokenError: parsed.error.issues[0].message }, { status: 400 });
+      const made = await createToken(who, parsed.data.name);
+      return { token: { value: made.token, name: made.name } };
+    } catch (error) {
+      if (error instanceof DomainError) return data({ tokenError: error.message }, { status: error.status });
+      throw error;
+    }
+  }
+  if (intent === "switch-organization") {
     const submission = await parseForm(formData, switchOrganizationSchema);
     if (submission.status !== "success") return data(submission.reply(), { status: 400 });
     try {
@@ -59,9 +80,10 @@ export async function action({ request, context }: Route.ActionArgs) {
 }
 
 export default function Account({ loaderData, actionData }: Route.ComponentProps) {
-  const { name, email, role, organizationName, others } = loaderData;
+  const { name, email, role, organizationName, others, tokens } = loaderData;
   const [form, fields] = useForm({
-    lastResult: actionData,
+    // Token posts go through fetchers; the route's own action data is the password form's reply.
+    lastResult: actionData && !("token" in actionData || "revoked" in actionData || "tokenError" in actionData) ? actionData : undefined,
     onValidate: ({ formData }) => parseWithZod(formData, { schema: changePasswordSchema }),
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
@@ -95,6 +117,9 @@ export default function Account({ loaderData, actionData }: Route.ComponentProps
             <Field label="Repeat the new password" autoComplete="new-password" {...inputProps(fields.confirm, "password")} />
             <Button>Change password</Button>
           </Form>
+        </Card>
+        <Card title="API tokens">
+          <TokenPanel tokens={tokens} />
         </Card>
         {others.length ? (
           <Card title="Your other organisations">
