@@ -104,12 +104,14 @@ export function fieldLabel(key: string) {
   return fieldLabels[key] ?? key.replace(/([a-z])([A-Z])/g, "$1 $2").replace(/^./, (c) => c.toUpperCase());
 }
 
+const unitNames: Record<string, string> = { "W/m2": "W/m²", "mW/cm2": "mW/cm²", "uW/cm2": "µW/cm²", percent: "% of limit" };
+
 /** A value as a short readable text: numbers as they are, lists and outlines summarised. */
 export function showValue(value: unknown): string {
   if (value === null || value === undefined || value === "") return "—";
   if (typeof value === "boolean") return value ? "yes" : "no";
-  if (typeof value === "number") return String(value);
-  if (typeof value === "string") return value;
+  if (typeof value === "number") return Number.isInteger(value) ? String(value) : String(Number(value.toPrecision(6)));
+  if (typeof value === "string") return unitNames[value] ?? value;
   if (Array.isArray(value)) {
     if (value.every((p) => Array.isArray(p) && p.length === 2 && p.every((n) => typeof n === "number"))) {
       return value.map((p) => `(${p[0]}, ${p[1]})`).join(" ");
