@@ -1,6 +1,6 @@
 // Sites: list, read, create, update (optimistic concurrency), delete. Each write is one
 // transaction with its audit row.
-import { and, asc, desc, eq, ilike, or, sql } from "drizzle-orm";
+import { and, asc, desc, eq, ilike, inArray, or, sql } from "drizzle-orm";
 import { db, schema, type Tx } from "~/infra/db.server";
 import { auditChange, type Actor } from "~/lib/audit.server";
 import { DomainError, staleEdit } from "~/lib/domain-error";
@@ -26,6 +26,10 @@ const sortColumns = {
   updated: site.updatedAt,
 } as const;
 
+/**
+ * One page of sites with the total. The total and the page come from one query; emitter counts
+ * are then counted for the page's sites only (sorting by them counts them all, in the sort).
+ */
 export async function listSites(scope: Scope, filter: SiteFilter) {
   const where = and(
     siteScope(scope),
@@ -42,7 +46,6 @@ export async function listSites(scope: Scope, filter: SiteFilter) {
       city: site.city,
       clientId: site.clientId,
       clientName: client.name,
-      emitterCount,
       updatedAt: site.updatedAt,
       total: sql<number>`count(*) over ()::int`,
     })
@@ -53,7 +56,16 @@ export async function listSites(scope: Scope, filter: SiteFilter) {
     .limit(filter.pageSize)
     .offset((filter.page - 1) * filter.pageSize);
   const total = rows[0]?.total ?? (filter.page > 1 ? await countSites(where) : 0);
-  return { sites: rows.map(({ total: _t, ...r }) => r), total };
+  const counts = new Map<string, number>();
+  if (rows.length) {
+    const found = await db
+      .select({ siteId: emitter.siteId, n: sql<number>`count(*)::int` })
+      .from(emitter)
+      .where(inArray(emitter.siteId, rows.map((r) => r.id)))
+      .groupBy(emitter.siteId);
+    for (const f of found) counts.set(f.siteId, f.n);
+  }
+  return { sites: rows.map(({ total: _t, ...r }) => ({ ...r, emitterCount: counts.get(r.id) ?? 0 })), total };
 }
 
 async function countSites(where: ReturnType<typeof and>) {
