@@ -57,3 +57,53 @@ export function describeHeights(o: Pick<ExposureOptions, "heights" | "mode">) {
   if (count === 1) return `at ${fromM} m above each surface`;
   return `${o.mode === "average" ? "spatial average" : "maximum"} over ${fromM}–${toM} m above each surface (${count} heights)`;
 }
+
+/** URL search parameter names of the options, shared by the Exposure pages (map, section, solid, planner). */
+const searchKeys = { standard: "standard", tier: "tier", gridStepM: "step", fromM: "from", toM: "to", count: "heights", mode: "mode", reflectionFactor: "reflection", defaultModel: "model" } as const;
+
+/** Options from a URL: absent or invalid values fall back to the defaults, field by field, with the messages for the ones refused. */
+export function optionsFromSearch(search: URLSearchParams, base: ExposureOptions = defaultOptions): { options: ExposureOptions; errors: Record<string, string> } {
+  const num = (key: string) => {
+    const raw = search.get(key);
+    return raw === null || raw.trim() === "" ? undefined : Number(raw);
+  };
+  const candidate = {
+    standard: search.get(searchKeys.standard) ?? base.standard,
+    tier: search.get(searchKeys.tier) ?? base.tier,
+    gridStepM: num(searchKeys.gridStepM) ?? base.gridStepM,
+    heights: { fromM: num(searchKeys.fromM) ?? base.heights.fromM, toM: num(searchKeys.toM) ?? base.heights.toM, count: num(searchKeys.count) ?? base.heights.count },
+    mode: search.get(searchKeys.mode) ?? base.mode,
+    reflectionFactor: num(searchKeys.reflectionFactor) ?? base.reflectionFactor,
+    defaultModel: search.get(searchKeys.defaultModel) ?? base.defaultModel,
+  };
+  const parsed = optionsSchema.safeParse(candidate);
+  if (parsed.success) return { options: parsed.data, errors: {} };
+  const errors: Record<string, string> = {};
+  const fallback = structuredClone(candidate) as Record<string, unknown>;
+  for (const issue of parsed.error.issues) {
+    const [top, inner] = issue.path as string[];
+    errors[inner ? `${top}.${inner}` : top] ??= issue.message;
+    fallback[top] = (base as Record<string, unknown>)[top];
+  }
+  const again = optionsSchema.safeParse(fallback);
+  return { options: again.success ? again.data : base, errors };
+}
+
+/** The options as URL search parameters (only those that differ from the defaults). */
+export function optionsToSearch(o: ExposureOptions): URLSearchParams {
+  const d = defaultOptions;
+  const out = new URLSearchParams();
+  const put = (key: string, value: string | number, fallback: string | number) => {
+    if (value !== fallback) out.set(key, String(value));
+  };
+  put(searchKeys.standard, o.standard, d.standard);
+  put(searchKeys.tier, o.tier, d.tier);
+  put(searchKeys.gridStepM, o.gridStepM, d.gridStepM);
+  put(searchKeys.fromM, o.heights.fromM, d.heights.fromM);
+  put(searchKeys.toM, o.heights.toM, d.heights.toM);
+  put(searchKeys.count, o.heights.count, d.heights.count);
+  put(searchKeys.mode, o.mode, d.mode);
+  put(searchKeys.reflectionFactor, o.reflectionFactor, d.reflectionFactor);
+  put(searchKeys.defaultModel, o.defaultModel, d.defaultModel);
+  return out;
+}
