@@ -3,7 +3,7 @@
 // layers on top through `children(frame)` (emitters, readings, exposure) in site metres via
 // frame.toPx. Clicks report site coordinates, so a polygon can be drawn on the plan.
 import { useId, useMemo, useRef, type MouseEvent, type ReactNode } from "react";
-import { boundsOf, makeFrame, scaleBarMetres, type PlanFrame, type XY } from "./plan-frame";
+import { backdropCorners, boundsOf, makeFrame, scaleBarMetres, type Bounds, type PlanFrame, type XY } from "./plan-frame";
 
 export type PlanSurface = { id: string; name: string; kind: "area" | "facade"; polygon?: XY[] | null; line?: [XY, XY] | null; elevationM?: number | null; bottomM?: number | null; topM?: number | null; access: "public" | "workers" | "none" };
 export type PlanObstruction = { id: string; name: string; polygon: XY[]; heightM: number };
@@ -24,6 +24,8 @@ type Props = {
   onSiteClick?: (site: XY) => void;
   onSiteMove?: (site: XY | null) => void;
   width?: number;
+  /** Holds the frame still (e.g. while a polygon is being drawn, so the plan does not jump under the pointer). */
+  bounds?: Bounds | null;
   children?: (frame: PlanFrame) => ReactNode;
 };
 
@@ -41,7 +43,7 @@ export function backdropTransform(b: PlanBackdrop, frame: PlanFrame) {
   return `translate(${ox} ${oy}) rotate(${b.rotationDeg}) scale(${k}) translate(${-b.p1[0]} ${-b.p1[1]})`;
 }
 
-export function SitePlan({ title, surfaces, obstructions = [], accessPoints = [], backdrop, extraPoints = [], highlightId, draft, onSiteClick, onSiteMove, width = 960, children }: Props) {
+export function SitePlan({ title, surfaces, obstructions = [], accessPoints = [], backdrop, extraPoints = [], highlightId, draft, onSiteClick, onSiteMove, width = 960, bounds: fixedBounds, children }: Props) {
   const svgRef = useRef<SVGSVGElement>(null);
   const titleId = useId();
   const frame = useMemo(() => {
@@ -53,8 +55,9 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
     for (const o of obstructions) points.push(...o.polygon);
     for (const a of accessPoints) points.push([a.x, a.y]);
     if (draft) points.push(...draft);
-    return makeFrame(boundsOf(points), { width });
-  }, [surfaces, obstructions, accessPoints, extraPoints, draft, width]);
+    if (backdrop) points.push(...backdropCorners(backdrop));
+    return makeFrame(fixedBounds ?? boundsOf(points), { width });
+  }, [surfaces, obstructions, accessPoints, extraPoints, draft, width, backdrop, fixedBounds]);
 
   const toSiteFromEvent = (event: MouseEvent<SVGSVGElement>): XY | null => {
     const svg = svgRef.current;
