@@ -90,6 +90,7 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
       viewBox={`0 0 ${frame.width} ${frame.height + FOOTER}`}
       role="img"
       aria-labelledby={titleId}
+      data-bounds={`${bounds.minX} ${bounds.minY} ${bounds.maxX} ${bounds.maxY}`}
       className={`block h-auto w-full select-none rounded-sheet border border-rule bg-white ${onSiteClick ? "cursor-crosshair" : ""}`}
       onClick={onSiteClick ? (e) => { const p = toSiteFromEvent(e); if (p) onSiteClick(p); } : undefined}
       onMouseMove={onSiteMove ? (e) => onSiteMove(toSiteFromEvent(e)) : undefined}
