@@ -5,16 +5,18 @@ import { expect, type Page } from "@playwright/test";
 
 export type SitePoint = [number, number];
 
-/** Clicks the plan at a site point. */
-export async function clickPlanAt(page: Page, [x, y]: SitePoint) {
+/** Clicks the plan at a site point: site metres → the plan's viewBox pixels → the screen, through the SVG's own matrix. */
+export async function clickPlanAt(page: Page, point: SitePoint) {
   const svg = page.getByTestId("layout-plan").locator("svg").first();
-  const box = await svg.boundingBox();
-  const [minX, , maxX, maxY] = ((await svg.getAttribute("data-bounds")) ?? "").split(" ").map(Number);
-  const [, , vbWidth] = ((await svg.getAttribute("viewBox")) ?? "").split(" ").map(Number);
-  if (!box) throw new Error("the plan is not on screen");
-  const scale = vbWidth / (maxX - minX); // viewBox pixels per metre
-  const toScreen = box.width / vbWidth;
-  await page.mouse.click(box.x + (x - minX) * scale * toScreen, box.y + (maxY - y) * scale * toScreen);
+  const { x, y } = await svg.evaluate((el, [sx, sy]) => {
+    const plan = el as SVGSVGElement;
+    const [minX, , maxX, maxY] = (plan.getAttribute("data-bounds") ?? "").split(" ").map(Number);
+    const perMetre = plan.viewBox.baseVal.width / (maxX - minX);
+    const at = new DOMPoint((sx - minX) * perMetre, (maxY - sy) * perMetre).matrixTransform(plan.getScreenCTM()!);
+    return { x: at.x, y: at.y };
+  }, point);
+  // Whole pixels: the browser drops a click's fraction of a pixel, which at some widths is 0.05 m.
+  await page.mouse.click(Math.round(x), Math.round(y));
 }
 
 /**

@@ -125,3 +125,34 @@ export function planOf(items: LayoutItem[]) {
   }
   return { surfaces, obstructions, accessPoints };
 }
+
+/** Whether a point lies inside an outline: the even–odd ray-crossing test (common practice, e.g. O'Rourke, Computational Geometry in C, §7.4, from memory). */
+export function insideOutline(points: readonly XY[], [x, y]: XY) {
+  let inside = false;
+  for (let i = 0, j = points.length - 1; i < points.length; j = i++) {
+    const [xi, yi] = points[i];
+    const [xj, yj] = points[j];
+    if (yi > y !== yj > y && x < ((xj - xi) * (y - yi)) / (yj - yi) + xi) inside = !inside;
+  }
+  return inside;
+}
+
+function distanceToSegment([x, y]: XY, [a, b]: [XY, XY]) {
+  const dx = b[0] - a[0], dy = b[1] - a[1];
+  const t = Math.max(0, Math.min(1, ((x - a[0]) * dx + (y - a[1]) * dy) / (dx * dx + dy * dy || 1)));
+  return Math.hypot(x - (a[0] + t * dx), y - (a[1] + t * dy));
+}
+
+/** The record under a click on the plan (within `reach` metres for points and segments): access points, facades, obstructions, then the highest area. */
+export function itemAt(items: LayoutItem[], at: XY, reach: number): string | null {
+  const plan = planOf(items);
+  const point = plan.accessPoints.find((a) => Math.hypot(a.x - at[0], a.y - at[1]) <= reach);
+  if (point) return point.id;
+  const facade = plan.surfaces.find((s) => s.kind === "facade" && s.line && distanceToSegment(at, s.line) <= reach);
+  if (facade) return facade.id;
+  const block = plan.obstructions.find((o) => o.polygon.length >= 3 && insideOutline(o.polygon, at));
+  if (block) return block.id;
+  const areas = plan.surfaces.filter((s) => s.kind === "area" && s.polygon.length >= 3 && insideOutline(s.polygon, at));
+  areas.sort((a, b) => (b.kind === "area" ? b.elevationM : 0) - (a.kind === "area" ? a.elevationM : 0));
+  return areas[0]?.id ?? null;
+}

@@ -7,11 +7,11 @@ import { useCallback, useEffect, useMemo, useState } from "react";
 import { Link } from "react-router";
 import { Button } from "~/components/button";
 import { BackdropPanel } from "./backdrop-panel";
-import { itemOfPath, itemsFromLayout, layoutFromItems, newKey, planOf, problemsOf, type LayoutItem } from "./editor-state";
+import { itemAt, itemOfPath, itemsFromLayout, layoutFromItems, newKey, planOf, problemsOf, type LayoutItem } from "./editor-state";
 import type { BackdropJson, LayoutJson } from "./json";
 import { ItemPanel } from "./item-panel";
 import { LevelList } from "./level-list";
-import { boundsOf, makeFrame, snap, type Bounds, type XY } from "./plan-frame";
+import { backdropCorners, boundsOf, snap, type Bounds, type PlanFrame, type XY } from "./plan-frame";
 import { SitePlan } from "./site-plan";
 
 type Tool = "area" | "facade" | "obstruction" | "access";
@@ -64,7 +64,7 @@ export function LayoutEditor({ siteId, siteName, initial }: { siteId: string; si
   };
 
   const startTool = (tool: Tool) => {
-    const points: XY[] = [...plan.surfaces.flatMap((s) => (s.kind === "area" ? s.polygon : s.line ?? [])), ...plan.obstructions.flatMap((o) => o.polygon), ...plan.accessPoints.map((a): XY => [a.x, a.y])];
+    const points: XY[] = [...plan.surfaces.flatMap((s) => (s.kind === "area" ? s.polygon : s.line ?? [])), ...plan.obstructions.flatMap((o) => o.polygon), ...plan.accessPoints.map((a): XY => [a.x, a.y]), ...(backdrop ? backdropCorners(backdrop) : [])];
     // Hold the frame still while drawing, with room around the drawing to draw beyond it.
     const b = boundsOf(points);
     const grow = Math.max(10, (b.maxX - b.minX) * 0.25, (b.maxY - b.minY) * 0.25);
@@ -102,14 +102,21 @@ export function LayoutEditor({ siteId, siteName, initial }: { siteId: string; si
     return () => window.removeEventListener("keydown", onKey);
   }, [drawing, cancel, finish]);
 
-  const onPlanClick = (at: XY) => {
-    if (!drawing) return;
+  const select = (key: string | null) => {
+    setSelected(key);
+    // On a narrow screen the panel sits above the list: bring it into view.
+    if (key) requestAnimationFrame(() => document.getElementById("selected-record")?.scrollIntoView({ block: "nearest", behavior: "smooth" }));
+  };
+
+  const onPlanClick = (at: XY, frame: PlanFrame) => {
+    if (!drawing) {
+      return select(itemAt(items, at, 0.6));
+    }
     const point: XY = [snap(at[0]), snap(at[1])];
     const { tool, points } = drawing;
     if (tool === "access") return finish([point]);
     if (tool === "facade") return points.length === 1 ? finish([points[0], point]) : setDrawing({ ...drawing, points: [point] });
     if (points.length >= 3) {
-      const frame = makeFrame(drawing.bounds, { width: PLAN_WIDTH });
       const [fx, fy] = frame.toPx(...points[0]);
       const [cx, cy] = frame.toPx(...at);
       if (Math.hypot(fx - cx, fy - cy) <= CLOSE_PX) return finish(points);
@@ -203,7 +210,7 @@ export function LayoutEditor({ siteId, siteName, initial }: { siteId: string; si
               draft={draft}
               bounds={drawing?.bounds}
               width={PLAN_WIDTH}
-              onSiteClick={drawing ? onPlanClick : undefined}
+              onSiteClick={onPlanClick}
               onSiteMove={setCursor}
             />
           </div>
@@ -211,7 +218,7 @@ export function LayoutEditor({ siteId, siteName, initial }: { siteId: string; si
             {cursor ? `x ${snap(cursor[0]).toFixed(1)} m, y ${snap(cursor[1]).toFixed(1)} m` : "x east, y north, in metres from the site's origin (+)"}
           </p>
         </div>
-        <aside className="min-w-0 rounded-sheet border border-rule bg-sheet p-4" aria-label="Selected record">
+        <aside id="selected-record" className="min-w-0 scroll-mt-4 rounded-sheet border border-rule bg-sheet p-4" aria-label="Selected record">
           {current ? (
             <ItemPanel
               key={current.key}
@@ -232,12 +239,12 @@ export function LayoutEditor({ siteId, siteName, initial }: { siteId: string; si
         </aside>
       </div>
 
-      <div className="grid gap-5 lg:grid-cols-2">
+      <div className="grid items-start gap-5 lg:grid-cols-2">
         <section aria-labelledby="levels-title" className="min-w-0 rounded-sheet border border-rule bg-sheet p-4">
           <h3 id="levels-title" className="mb-3 text-base font-bold">
             Levels and records
           </h3>
-          <LevelList items={items} selected={selected} problems={(key) => problemsFor(key).length} onSelect={setSelected} />
+          <LevelList items={items} selected={selected} problems={(key) => problemsFor(key).length} onSelect={select} />
         </section>
         <section aria-labelledby="backdrop-title" className="min-w-0 rounded-sheet border border-rule bg-sheet p-4">
           <h3 id="backdrop-title" className="mb-3 text-base font-bold">
