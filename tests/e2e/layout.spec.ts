@@ -42,8 +42,10 @@ test("an engineer draws a surface on the plan, saves it, and sees a crossing out
   await page.keyboard.press("Escape");
   await expect(page.getByRole("button", { name: /^Finish/ })).toHaveCount(0);
 
-  // The site page shows the saved area on its level; the bow tie was never saved.
-  await visit(page, page.url().replace(/\/layout$/, ""));
+  // Leaving with the unsaved bow tie asks first; the site page shows the saved area on its level.
+  page.on("dialog", (dialog) => void dialog.accept());
+  await page.getByRole("link", { name: "Leave without saving" }).click();
+  await expect(page.getByRole("link", { name: "Edit layout" })).toBeVisible();
   const levels = page.getByTestId("level-list");
   await expect(levels).toContainText("Level 0.0 m");
   await expect(levels).toContainText("Main roof");

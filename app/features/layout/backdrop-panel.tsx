@@ -83,10 +83,10 @@ export function BackdropPanel({ siteId, backdrop, onChange }: Props) {
           </p>
           <svg ref={svg} viewBox={`0 0 ${backdrop.widthPx} ${backdrop.heightPx}`} className="block max-h-72 w-full cursor-crosshair rounded-control border border-rule bg-paper" onClick={pick} role="img" aria-label="The roof drawing: click to set the two scale points">
             <image href={backdrop.href} width={backdrop.widthPx} height={backdrop.heightPx} />
-            <line x1={backdrop.p1[0]} y1={backdrop.p1[1]} x2={backdrop.p2[0]} y2={backdrop.p2[1]} className="stroke-flag-600" strokeWidth={Math.max(backdrop.widthPx, backdrop.heightPx) / 200} vectorEffect="non-scaling-stroke" />
+            <line x1={backdrop.p1[0]} y1={backdrop.p1[1]} x2={backdrop.p2[0]} y2={backdrop.p2[1]} className="stroke-ink-900" strokeDasharray="6 4" strokeWidth={Math.max(backdrop.widthPx, backdrop.heightPx) / 200} vectorEffect="non-scaling-stroke" />
             {[backdrop.p1, backdrop.p2].map((p, i) => (
               <g key={i} transform={`translate(${p[0]} ${p[1]})`}>
-                <circle r={Math.max(backdrop.widthPx, backdrop.heightPx) / 80} className="fill-sheet stroke-flag-600" strokeWidth={2} vectorEffect="non-scaling-stroke" />
+                <circle r={Math.max(backdrop.widthPx, backdrop.heightPx) / 80} className="fill-sheet stroke-ink-900" strokeWidth={2} vectorEffect="non-scaling-stroke" />
                 <text y={-Math.max(backdrop.widthPx, backdrop.heightPx) / 50} textAnchor="middle" fontSize={Math.max(backdrop.widthPx, backdrop.heightPx) / 25} className="fill-ink-900 font-bold">
                   {i + 1}
                 </text>

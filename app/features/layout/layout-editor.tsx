@@ -4,7 +4,7 @@
 // coordinate table; the roof drawing. Save sends the whole layout with the site's version in one
 // PUT; a 409 loads the layout as it now stands and keeps this copy to put back.
 import { useCallback, useEffect, useMemo, useState } from "react";
-import { Link } from "react-router";
+import { Link, useBlocker } from "react-router";
 import { Button } from "~/components/button";
 import { BackdropPanel } from "./backdrop-panel";
 import { itemAt, itemOfPath, itemsFromLayout, layoutFromItems, newKey, planOf, problemsOf, type LayoutItem } from "./editor-state";
@@ -51,6 +51,20 @@ export function LayoutEditor({ siteId, siteName, initial }: { siteId: string; si
   const [mine, setMine] = useState<LayoutItem[] | null>(null);
   const [saving, setSaving] = useState(false);
   const [dirty, setDirty] = useState(false);
+
+  // Unsaved changes are not left behind by a click elsewhere or a closed tab without a question.
+  const blocker = useBlocker(({ currentLocation, nextLocation }) => dirty && currentLocation.pathname !== nextLocation.pathname);
+  useEffect(() => {
+    if (blocker.state !== "blocked") return;
+    if (window.confirm("Leave the layout editor? Your unsaved changes will be lost.")) blocker.proceed();
+    else blocker.reset();
+  }, [blocker]);
+  useEffect(() => {
+    if (!dirty) return;
+    const warn = (event: BeforeUnloadEvent) => event.preventDefault();
+    window.addEventListener("beforeunload", warn);
+    return () => window.removeEventListener("beforeunload", warn);
+  }, [dirty]);
 
   const plan = useMemo(() => planOf(items), [items]);
   const problems = useMemo(() => problemsOf(items), [items]);
@@ -126,7 +140,7 @@ export function LayoutEditor({ siteId, siteName, initial }: { siteId: string; si
 
   async function save() {
     if (problemCount) {
-      setStatus({ tone: "danger", text: `Nothing is saved yet: fix ${problemCount === 1 ? "the problem" : `the ${problemCount} problems`} marked below first.` });
+      setStatus({ tone: "danger", text: `Nothing is saved yet: fix ${problemCount === 1 ? "the problem" : `the ${problemCount} problems`} marked ⊠ on the records first.` });
       const first = items.find((i) => problems.has(i.key));
       if (first) setSelected(first.key);
       return;
