@@ -13,7 +13,7 @@ export type AccessPointKind = (typeof accessPointKinds)[number];
 
 /** Records per list, and points per outline, at most. */
 export const LAYOUT_MAX_ITEMS = 500;
-export const OUTLINE_MAX_POINTS = 1000;
+export const OUTLINE_MAX_POINTS = 500;
 /** A layout body's largest size: 2 MiB (500 outlines of a few dozen points fit easily). */
 export const LAYOUT_BODY_MAX_BYTES = 2 * 1024 * 1024;
 
