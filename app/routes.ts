@@ -26,6 +26,7 @@ export default [
       route(":siteId", "routes/sites/site.tsx", [
         index("routes/sites/layout.tsx"),
         route("edit", "routes/sites/edit.tsx"),
+        route("layout", "routes/sites/layout-edit.tsx"),
         route("history", "routes/sites/history.tsx"),
         route("visits", "routes/sites/visits.tsx"),
         route("visits/new", "routes/sites/visit-new.tsx"),
@@ -49,6 +50,8 @@ export default [
     route("v1/sites", "routes/api/v1/sites.ts"),
     route("v1/sites/:siteId", "routes/api/v1/site.ts"),
     route("v1/sites/:siteId/history", "routes/api/v1/site-history.ts"),
+    route("v1/sites/:siteId/surfaces", "routes/api/v1/site-surfaces.ts"),
+    route("v1/sites/:siteId/backdrop", "routes/api/v1/site-backdrop.ts"),
     route("v1/sites/:siteId/visits", "routes/api/v1/site-visits.ts"),
     route("v1/visits/:visitId", "routes/api/v1/visit.ts"),
     route("v1/visits/:visitId/photos", "routes/api/v1/visit-photos.ts"),

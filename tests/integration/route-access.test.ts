@@ -97,6 +97,11 @@ const cases: Case[] = [
   { file: "routes/api/v1/sites.ts", method: "action", path: () => "/api/v1/sites", json: {}, expect: apiRoles(inventoryEditors, "bad-request") },
   { file: "routes/api/v1/site.ts", method: "loader", path: () => `/api/v1/sites/${siteId}`, params: () => ({ siteId }), expect: apiRoles(staffRoles, "ok") },
   { file: "routes/api/v1/site.ts", method: "action", path: () => `/api/v1/sites/${siteId}`, method2: "PATCH", json: {}, params: () => ({ siteId }), expect: apiRoles(inventoryEditors, "bad-request") },
+  { file: "routes/sites/layout-edit.tsx", method: "loader", path: () => `/sites/${siteId}/layout`, params: () => ({ siteId }), expect: rolesIn(inventoryEditors, "ok") },
+  { file: "routes/api/v1/site-surfaces.ts", method: "loader", path: () => `/api/v1/sites/${siteId}/surfaces`, params: () => ({ siteId }), expect: apiRoles(staffRoles, "ok") },
+  { file: "routes/api/v1/site-surfaces.ts", method: "action", path: () => `/api/v1/sites/${siteId}/surfaces`, method2: "PUT", json: {}, params: () => ({ siteId }), expect: apiRoles(inventoryEditors, "bad-request") },
+  // A JSON body is not a multipart upload: 415 once the guard lets the member through.
+  { file: "routes/api/v1/site-backdrop.ts", method: "action", path: () => `/api/v1/sites/${siteId}/backdrop`, json: {}, params: () => ({ siteId }), expect: apiRoles(inventoryEditors, "unsupported") },
   { file: "routes/api/v1/site-history.ts", method: "loader", path: () => `/api/v1/sites/${siteId}/history`, params: () => ({ siteId }), expect: apiRoles(staffRoles, "ok") },
   { file: "routes/sites/visits.tsx", method: "loader", path: () => `/sites/${siteId}/visits`, params: () => ({ siteId }), expect: rolesIn(staffRoles, "ok") },
   { file: "routes/sites/visit-new.tsx", method: "loader", path: () => `/sites/${siteId}/visits/new`, params: () => ({ siteId }), expect: rolesIn(inventoryEditors, "ok") },
