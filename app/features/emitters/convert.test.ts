@@ -51,7 +51,7 @@ describe("the row form", () => {
     expect(values.powerPerCarrierW).toBeCloseTo(39.810717055349734, 12);
     expect(values.powerUnit).toBe("dBm");
     expect(values.gainDbi).toBeCloseTo(18, 12);
-    expect(values.pattern).toEqual({ type: "3gpp-38.901", hBeamwidthDeg: 65, vBeamwidthDeg: 7 });
+    expect(values.pattern).toEqual({ type: "3gpp-38.901", hBeamwidthDeg: 65, vBeamwidthDeg: 7, maxAttenuationDb: 30, sideLobeDb: 30 });
     const back = formDefaults(values);
     expect(back.power).toBe("46");
     expect(back.gain).toBe("15.85");

@@ -51,7 +51,8 @@ export const tidy = (v: number) => Number(v.toPrecision(12));
 
 /** The parametric pattern a kind and two beamwidths describe. */
 export function parametricPattern(kind: ParametricKind, hBeamwidthDeg: number, vBeamwidthDeg: number): ParametricPattern {
-  return { type: kind, hBeamwidthDeg, vBeamwidthDeg } as ParametricPattern;
+  // TR 38.901 Table 7.3-1: A_max = 30 dB, SLA_V = 30 dB (the engine's defaults).
+  return kind === "3gpp-38.901" ? { type: kind, hBeamwidthDeg, vBeamwidthDeg, maxAttenuationDb: 30, sideLobeDb: 30 } : { type: kind, hBeamwidthDeg, vBeamwidthDeg };
 }
 
 export const isParametricKind = (v: string): v is ParametricKind => (PARAMETRIC_KINDS as readonly string[]).includes(v);

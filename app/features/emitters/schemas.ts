@@ -27,7 +27,7 @@ export const parametricPatternSchema = z.discriminatedUnion(
   "type",
   [
     z.strictObject({ type: z.literal("isotropic") }),
-    z.strictObject({ type: z.literal("3gpp-38.901"), hBeamwidthDeg: hBeam, vBeamwidthDeg: vBeam, maxAttenuationDb: db("the maximum attenuation in dB").optional(), sideLobeDb: db("the side-lobe level in dB").optional() }),
+    z.strictObject({ type: z.literal("3gpp-38.901"), hBeamwidthDeg: hBeam, vBeamwidthDeg: vBeam, maxAttenuationDb: db("the maximum attenuation in dB").default(30), sideLobeDb: db("the side-lobe level in dB").default(30) }),
     z.strictObject({
       type: z.literal("itu-r-f.1336-sectoral"),
       hBeamwidthDeg: numberIn("the horizontal beamwidth in degrees", { min: 0, exclusiveMin: true, max: 180 }),
