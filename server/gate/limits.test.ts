@@ -2,9 +2,11 @@
 // features' limit modules and the gate's table name the same paths and numbers.
 import { describe, expect, it } from "vitest";
 import { visitUploadLimits } from "~/features/visits/limits";
+import { emitterUploadLimits } from "~/features/emitters/limits";
 import { bodyLimitFor, DEFAULT_BODY_LIMIT, largeBodyRoutes } from "./limits.mjs";
 
 const featureLimits = [...visitUploadLimits];
+featureLimits.push(...(emitterUploadLimits as unknown as typeof featureLimits));
 
 describe("large-body routes", () => {
   it("lists every feature's upload path with the feature's own limit", () => {
