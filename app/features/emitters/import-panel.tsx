@@ -85,7 +85,7 @@ export function ImportPanel({ siteId, count }: { siteId: string; count: number }
             <input type="radio" name="import-mode" value="append" checked={mode === "append"} onChange={() => setMode("append")} /> Add to the list
           </label>
           <label className="flex items-center gap-1.5">
-            <input type="radio" name="import-mode" value="replace" checked={mode === "replace"} onChange={() => setMode("replace")} /> Replace all {count} emitter{count === 1 ? "" : "s"}
+            <input type="radio" name="import-mode" value="replace" checked={mode === "replace"} onChange={() => setMode("replace")} /> {count ? `Replace all ${count} emitter${count === 1 ? "" : "s"}` : "Replace (the list is empty)"}
           </label>
         </fieldset>
         <Button type="button" tone="secondary" disabled={busy} onClick={() => void run("check")}>

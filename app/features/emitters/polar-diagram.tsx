@@ -23,7 +23,7 @@ export function PolarDiagram({ cut, kind, title, size = 240 }: { cut: PolarCut; 
       {[0, 10, 20, 30].map((db) => (
         <g key={db}>
           <circle r={radius(db)} fill="none" className={db === 0 ? "stroke-graphite-500" : "stroke-rule"} strokeWidth={db === 0 ? 1 : 0.75} />
-          <text x={2} y={-radius(db) + 8} fontSize={7} className="fill-graphite-600">
+          <text x={2} y={-radius(db) + 9} fontSize={9} className="fill-graphite-600">
             {db === 0 ? "0 dB" : `−${db}`}
           </text>
         </g>
@@ -34,7 +34,7 @@ export function PolarDiagram({ cut, kind, title, size = 240 }: { cut: PolarCut; 
         return (
           <g key={deg}>
             <line x1={0} y1={0} x2={x} y2={y} className="stroke-rule" strokeWidth={0.5} />
-            <text x={lx} y={ly + 3} textAnchor="middle" fontSize={8} className="fill-graphite-600">
+            <text x={lx} y={ly + 3} textAnchor="middle" fontSize={9} className="fill-graphite-600">
               {angleLabel(deg)}
             </text>
           </g>

@@ -92,7 +92,7 @@ function PatternCard({ pattern, canEdit }: { pattern: PatternView; canEdit: bool
         {canEdit ? <DeletePattern pattern={pattern} /> : null}
       </div>
       <div className="mt-3">
-        <PatternPolars horizontal={cuts.horizontal} vertical={cuts.vertical} name={pattern.name} size={200} />
+        <PatternPolars horizontal={cuts.horizontal} vertical={cuts.vertical} name={pattern.name} size={220} />
       </div>
     </li>
   );
