@@ -26,7 +26,7 @@ test("an engineer imports emitters from CSV, fixes the file after the report, an
   const table = page.getByRole("table", { name: "Emitters of this site, with EIRP and ERP" });
   const e1 = table.getByRole("row").filter({ hasText: "E1" }).first();
   await expect(e1).toContainText("15.85 dBd");
-  await expect(e1).toContainText("3.8 kW");
+  await expect(e1).toContainText("3.83 kW");
 
   // Inline edit: the power in dBm, the azimuth; errors next to the field first.
   await e1.getByRole("button", { name: "Edit emitter E1" }).click();

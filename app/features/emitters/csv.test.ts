@@ -114,3 +114,14 @@ describe("emitter CSV: writing", () => {
     expect(values[0].notes).toBe("=SUM(A1)");
   });
 });
+
+describe("the README's example", () => {
+  it("imports without a problem", async () => {
+    const { readFileSync } = await import("node:fs");
+    const readme = readFileSync(new URL("../../../README.md", import.meta.url), "utf8");
+    const block = readme.slice(readme.indexOf("### Emitter CSV")).match(/```csv\n([\s\S]*?)```/)![1];
+    const { valid, problems } = emittersFromCsv(block, library);
+    expect(problems).toEqual([]);
+    expect(valid.map((v) => v.emitter.label)).toEqual(["A1", "N1"]);
+  });
+});
