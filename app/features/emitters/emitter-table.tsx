@@ -131,7 +131,7 @@ export function EmitterTable({
           const i = colours.get(c.row.original.operator.trim() || "—") ?? 0;
           return (
             <span
-              className="inline-flex max-w-36 items-center gap-1.5"
+              className="inline-flex max-w-32 items-center gap-1.5"
               title={c.row.original.operator}
             >
               <svg
@@ -159,7 +159,7 @@ export function EmitterTable({
         header: "Band",
         accessorKey: "band",
         cell: (c) => (
-          <span className="block max-w-28 truncate" title={c.row.original.band}>
+          <span className="block max-w-24 truncate" title={c.row.original.band}>
             {c.row.original.band || "—"}
           </span>
         ),
@@ -380,7 +380,6 @@ export function EmitterTable({
                     >
                       {editing === row.id ? "Close" : "Edit"}
                     </button>
-                    <DeleteEmitter row={row.original} />
                   </td>
                 ) : null}
               </tr>
@@ -401,6 +400,9 @@ export function EmitterTable({
                         onDone={() => setEditing(null)}
                         onCancel={() => setEditing(null)}
                       />
+                      <div className="mt-3 border-t border-rule pt-3">
+                        <DeleteEmitter row={row.original} />
+                      </div>
                     </div>
                   </td>
                 </tr>
