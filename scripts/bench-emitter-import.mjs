@@ -5,10 +5,12 @@
 //   npm run -s with-stack -- node scripts/bench-emitter-import.mjs 5000
 //   BUILD_DIR=build-test npm run -s build && WITH_APP=1 npm run -s with-stack -- node scripts/bench-emitter-import.mjs 5000
 import { createHmac, randomBytes, randomUUID } from "node:crypto";
+import { cpus, loadavg } from "node:os";
 import { register } from "tsx/esm/api";
 import postgres from "postgres";
 
 const rows = Number(process.argv[2] ?? 5000);
+process.env.EMITTER_IMPORT_TIMING ??= "1";
 if (!process.env.DATABASE_URL) throw new Error("Run through `npm run with-stack` (DATABASE_URL is needed).");
 const sql = postgres(process.env.DATABASE_URL, { max: 2, onnotice: () => {} });
 register({ tsconfig: "./tsconfig.json" });
@@ -40,7 +42,7 @@ const bytes = new TextEncoder().encode(csv(rows));
 const ms = (t0) => (performance.now() - t0).toFixed(0);
 
 try {
-  console.log(`emitter CSV: ${rows} rows, ${(bytes.byteLength / 1024).toFixed(0)} KiB`);
+  console.log(`emitter CSV: ${rows} rows, ${(bytes.byteLength / 1024).toFixed(0)} KiB; machine: ${cpus().length} cores, load average ${loadavg().map((l) => l.toFixed(1)).join(" / ")}`);
   let t0 = performance.now();
   const checked = emittersFromCsvBytes(bytes, []);
   console.log(`  check only (papaparse + field rules): ${ms(t0)} ms, ${checked.valid.length} valid, ${checked.problems.length} problems`);

@@ -6,6 +6,7 @@ import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { importEmitters } from "~/features/emitters/bulk.server";
 import { db, schema } from "~/infra/db.server";
+import { snapshot } from "~/lib/snapshot";
 import * as csvApi from "~/routes/api/v1/site-emitters-csv";
 import * as emittersApi from "~/routes/api/v1/site-emitters";
 import * as patternsApi from "~/routes/api/v1/patterns";
@@ -152,14 +153,20 @@ describe("CSV import and export", () => {
     const got = await importCsv(rows(3), "?mode=replace", eng(), site);
     expect(got.status).toBe(201);
     expect(got.body.emitters.map((e: { label: string }) => e.label)).toEqual(["R1", "R2", "R3"]);
-    expect((await audits(site)).filter((e) => e.action === "emitter.created")).toHaveLength(3);
+    const created = (await audits(site)).filter((e) => e.action === "emitter.created");
+    expect(created).toHaveLength(3);
+    // The audit rows are built in SQL; they hold what snapshot() would, so History reads them alike.
+    const [r1] = (await stored(site)).filter((e) => e.label === "R1");
+    expect(created.find((e) => e.subjectId === r1.id)).toMatchObject({ before: null, after: snapshot(r1), actorUserId: a.people.engineer.userId });
     const appended = await importCsv(rows(2), "?mode=append", { token }, site);
     expect(appended.status).toBe(201);
     expect(await stored(site)).toHaveLength(5);
     const replaced = await importCsv(rows(1), "?mode=replace", eng(), site);
     expect(replaced.body.deleted).toBe(5);
     expect((await stored(site)).map((e) => e.label)).toEqual(["R1"]);
-    expect((await audits(site)).filter((e) => e.action === "emitter.deleted")).toHaveLength(5);
+    const deleted = (await audits(site)).filter((e) => e.action === "emitter.deleted");
+    expect(deleted).toHaveLength(5);
+    expect(deleted.find((e) => e.subjectId === r1.id)).toMatchObject({ before: snapshot(r1), after: null });
   });
 
   it("refuses a file with a bad row in the middle: every problem by row and column, no emitter, no audit row", async () => {
