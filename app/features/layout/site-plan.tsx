@@ -230,8 +230,11 @@ function FacadeLabel({ frame, line, text }: { frame: PlanFrame; line: [XY, XY]; 
   if (angle < -90) angle += 180;
   const x = (a[0] + b[0]) / 2;
   const y = (a[1] + b[1]) / 2;
+  // The label sits on the side of the segment towards the middle of the plan, so it is not cut off at an edge.
+  const turn = (angle * Math.PI) / 180;
+  const towardsMiddle = Math.sin(turn) * (frame.width / 2 - x) - Math.cos(turn) * (frame.height / 2 - y) >= 0;
   return (
-    <text transform={`translate(${x} ${y}) rotate(${angle})`} y={-8} textAnchor="middle" className={`fill-ink-700 text-[11px] ${halo.className}`} strokeWidth={halo.strokeWidth}>
+    <text transform={`translate(${x} ${y}) rotate(${angle})`} y={towardsMiddle ? -8 : 16} textAnchor="middle" className={`fill-ink-700 text-[11px] ${halo.className}`} strokeWidth={halo.strokeWidth}>
       {text}
     </text>
   );
