@@ -3,9 +3,10 @@
 import { describe, expect, it } from "vitest";
 import { layoutUploadLimits } from "~/features/layout/limits";
 import { visitUploadLimits } from "~/features/visits/limits";
+import { emitterUploadLimits } from "~/features/emitters/limits";
 import { bodyLimitFor, DEFAULT_BODY_LIMIT, largeBodyRoutes } from "./limits.mjs";
 
-const featureLimits = [...visitUploadLimits, ...layoutUploadLimits];
+const featureLimits = [...visitUploadLimits, ...layoutUploadLimits, ...emitterUploadLimits];
 
 describe("large-body routes", () => {
   it("lists every feature's upload path with the feature's own limit", () => {
