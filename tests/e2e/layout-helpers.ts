@@ -1,6 +1,7 @@
 // Drawing on the layout editor's plan by clicking at site coordinates (metres, x east, y north).
 // The plan's <svg> says which part of the site it shows (data-bounds) and its pixel size (viewBox),
-// so a site point becomes a click on the screen. Shared with the combined issue-7 flow.
+// so a site point becomes a click on the screen. Shared with the combined issue-7 flow: open the
+// editor first (the site page's "Edit layout" link, /sites/:siteId/layout), then drawOutline → saveLayout.
 import { expect, type Page } from "@playwright/test";
 
 export type SitePoint = [number, number];

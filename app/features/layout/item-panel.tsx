@@ -28,6 +28,18 @@ function Metres({ id, label, value, onChange }: { id: string; label: string; val
   );
 }
 
+/** A new last point: halfway along the closing edge (so the outline stays valid), or beside the only point. */
+function nextPoint(points: TextPoint[]): TextPoint {
+  const n = (s: string) => Number(s.replace(",", "."));
+  if (points.length === 0) return ["0", "0"];
+  const [lx, ly] = points[points.length - 1].map(n);
+  const [fx, fy] = points[0].map(n);
+  if (![lx, ly, fx, fy].every(Number.isFinite)) return ["", ""];
+  const round = (v: number) => String(Number(v.toFixed(2)));
+  if (points.length === 1) return [round(lx + 1), round(ly)];
+  return [round((lx + fx) / 2), round((ly + fy) / 2)];
+}
+
 function PointsTable({ id, points, onChange, fixed }: { id: string; points: TextPoint[]; onChange: (points: TextPoint[]) => void; fixed?: boolean }) {
   const set = (i: number, axis: 0 | 1, value: string) => onChange(points.map((p, j) => (j === i ? ((axis === 0 ? [value, p[1]] : [p[0], value]) as TextPoint) : p)));
   return (
@@ -64,7 +76,7 @@ function PointsTable({ id, points, onChange, fixed }: { id: string; points: Text
         </tbody>
       </table>
       {fixed ? null : (
-        <Button type="button" tone="secondary" size="sm" className="mt-2" onClick={() => onChange([...points, points.length ? [...points[points.length - 1]] as TextPoint : ["0", "0"]])}>
+        <Button type="button" tone="secondary" size="sm" className="mt-2" onClick={() => onChange([...points, nextPoint(points)])}>
           Add point
         </Button>
       )}

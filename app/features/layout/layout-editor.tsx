@@ -96,7 +96,6 @@ export function LayoutEditor({ siteId, siteName, initial }: { siteId: string; si
       setSelected(item.key);
       setDrawing(null);
     },
-    // eslint-disable-next-line react-hooks/exhaustive-deps
     [drawing, items, current],
   );
 

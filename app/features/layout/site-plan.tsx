@@ -149,7 +149,7 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
         ) : s.kind === "facade" && s.line ? (
           <g key={s.id}>
             <path d={path(s.line, false)} className={s.id === highlightId ? "stroke-ink-900" : "stroke-ink-700"} strokeWidth={5} strokeLinecap="butt" />
-            <FacadeLabel frame={frame} line={s.line} text={`${s.name} (facade)`} />
+            <FacadeLabel frame={frame} line={s.line} name={s.name} />
           </g>
         ) : null,
       )}
@@ -223,15 +223,23 @@ function AreaLabel({ frame, surface }: { frame: PlanFrame; surface: PlanSurface 
 }
 
 /** The facade's name along its segment, upright whichever way the segment runs. */
-function FacadeLabel({ frame, line, text }: { frame: PlanFrame; line: [XY, XY]; text: string }) {
+function FacadeLabel({ frame, line, name }: { frame: PlanFrame; line: [XY, XY]; name: string }) {
   const [a, b] = line.map((p) => frame.toPx(...p));
+  // As much of "name (facade)" as fits along the segment (about 6 px a character at 11 px).
+  const room = Math.max(6, Math.floor(Math.hypot(b[0] - a[0], b[1] - a[1]) / 6));
+  const full = `${name} (facade)`;
+  const text = full.length <= room ? full : name.length <= room ? name : `${name.slice(0, room - 1)}…`;
   let angle = (Math.atan2(b[1] - a[1], b[0] - a[0]) * 180) / Math.PI;
   if (angle > 90) angle -= 180;
   if (angle < -90) angle += 180;
   const x = (a[0] + b[0]) / 2;
   const y = (a[1] + b[1]) / 2;
+  // The label sits on the side of the segment towards the middle of the plan, so it is not cut off at an edge.
+  const turn = (angle * Math.PI) / 180;
+  const towardsMiddle = Math.sin(turn) * (frame.width / 2 - x) - Math.cos(turn) * (frame.height / 2 - y) >= 0;
   return (
-    <text transform={`translate(${x} ${y}) rotate(${angle})`} y={-8} textAnchor="middle" className={`fill-ink-700 text-[11px] ${halo.className}`} strokeWidth={halo.strokeWidth}>
+    <text transform={`translate(${x} ${y}) rotate(${angle})`} y={towardsMiddle ? -8 : 16} textAnchor="middle" className={`fill-ink-700 text-[11px] ${halo.className}`} strokeWidth={halo.strokeWidth}>
+      <title>{full}</title>
       {text}
     </text>
   );
