@@ -6,8 +6,9 @@ import { Button } from "~/components/button";
 import { controlClass, FormErrors } from "~/components/field";
 import { SIGN_CATEGORIES, signLabels, type MitigationPlan } from "~/features/exposure/mitigation";
 import { classShort } from "./class-map";
+import { figure3 } from "./format";
 
-const small = "block w-full min-h-9 rounded-control border border-rule-strong bg-sheet px-2 py-1 text-sm text-ink-900";
+const small = "block min-h-9 rounded-control border border-rule-strong bg-sheet px-2 py-1 text-sm text-ink-900";
 
 export function replyErrors(result: SubmissionResult<string[]> | null | undefined) {
   if (!result?.error) return [];
@@ -30,8 +31,8 @@ export function MitigationEditor({ plan, version, canEdit, result, labelOf }: { 
             {plan.zones.map((z) => (
               <li key={z.id} className="rounded-sheet border border-rule bg-sheet p-3 text-sm">
                 <p className="font-medium break-words">{z.surfaceName}: zone {z.id}, <span className="figures">{z.areaM2.toFixed(1)} m²</span> around ({z.centre[0].toFixed(1)}, {z.centre[1].toFixed(1)}) m, worst class: {classShort[z.worstClass]}</p>
-                <p className="mt-1">Untrained people (general-population limit): {z.powerDown.general.length ? z.powerDown.general.map((e) => `${labelOf(e.id)} (${e.maxPercent.toPrecision(3)} %)`).join(", ") : "none over the threshold"}</p>
-                {z.worstClass >= 2 ? <p className="mt-1">RF-trained workers (occupational limit): {z.powerDown.occupational.length ? z.powerDown.occupational.map((e) => `${labelOf(e.id)} (${e.maxPercent.toPrecision(3)} %)`).join(", ") : "none over the threshold"}</p> : null}
+                <p className="mt-1">Untrained people (general-population limit): {z.powerDown.general.length ? z.powerDown.general.map((e) => `${labelOf(e.id)} (${figure3(e.maxPercent)} %)`).join(", ") : "none over the threshold"}</p>
+                {z.worstClass >= 2 ? <p className="mt-1">RF-trained workers (occupational limit): {z.powerDown.occupational.length ? z.powerDown.occupational.map((e) => `${labelOf(e.id)} (${figure3(e.maxPercent)} %)`).join(", ") : "none over the threshold"}</p> : null}
               </li>
             ))}
           </ul>
@@ -53,11 +54,11 @@ export function MitigationEditor({ plan, version, canEdit, result, labelOf }: { 
                 {plan.signs.map((s, i) => (
                   <tr key={s.id} className="border-b border-rule align-top last:border-b-0">
                     <td className="px-2 py-2 figures">{s.id}<input type="hidden" name={`signs[${i}].id`} value={s.id} /><span className="block text-xs text-graphite-500">{s.origin}</span></td>
-                    <td className="px-2 py-2"><select aria-label={`Category of ${s.id}`} name={`signs[${i}].category`} defaultValue={s.category} disabled={!canEdit} className={small}>{SIGN_CATEGORIES.map((c) => <option key={c} value={c}>{signLabels[c]}</option>)}</select></td>
-                    <td className="px-2 py-2"><input aria-label={`x of ${s.id}`} name={`signs[${i}].x`} defaultValue={s.x} inputMode="decimal" disabled={!canEdit} className={`${small} w-20`} /></td>
-                    <td className="px-2 py-2"><input aria-label={`y of ${s.id}`} name={`signs[${i}].y`} defaultValue={s.y} inputMode="decimal" disabled={!canEdit} className={`${small} w-20`} /></td>
-                    <td className="px-2 py-2"><input aria-label={`Where ${s.id} stands`} name={`signs[${i}].where`} defaultValue={s.where} maxLength={200} disabled={!canEdit} className={`${small} min-w-48`} /></td>
-                    <td className="px-2 py-2"><input aria-label={`Note on ${s.id}`} name={`signs[${i}].note`} defaultValue={s.note} maxLength={500} disabled={!canEdit} className={`${small} min-w-48`} /></td>
+                    <td className="px-2 py-2"><select aria-label={`Category of ${s.id}`} name={`signs[${i}].category`} defaultValue={s.category} disabled={!canEdit} className={`${small} w-44`}>{SIGN_CATEGORIES.map((c) => <option key={c} value={c}>{signLabels[c]}</option>)}</select></td>
+                    <td className="px-2 py-2"><input aria-label={`x of ${s.id}`} name={`signs[${i}].x`} defaultValue={s.x} inputMode="decimal" disabled={!canEdit} className={`${small} w-24`} /></td>
+                    <td className="px-2 py-2"><input aria-label={`y of ${s.id}`} name={`signs[${i}].y`} defaultValue={s.y} inputMode="decimal" disabled={!canEdit} className={`${small} w-24`} /></td>
+                    <td className="px-2 py-2"><input aria-label={`Where ${s.id} stands`} name={`signs[${i}].where`} defaultValue={s.where} maxLength={200} disabled={!canEdit} className={`${small} w-60`} /></td>
+                    <td className="px-2 py-2"><input aria-label={`Note on ${s.id}`} name={`signs[${i}].note`} defaultValue={s.note} maxLength={500} disabled={!canEdit} className={`${small} w-60`} /></td>
                     <td className="px-2 py-2 text-center"><input type="checkbox" aria-label={`Remove ${s.id}`} name={`signs[${i}].remove`} disabled={!canEdit} className="h-5 w-5" /></td>
                   </tr>
                 ))}
@@ -92,12 +93,12 @@ export function MitigationEditor({ plan, version, canEdit, result, labelOf }: { 
           <input type="hidden" name="intent" value="add-sign" />
           <input type="hidden" name="mitigationVersion" value={version} />
           <div className="grid gap-2 sm:grid-cols-[10rem_6rem_6rem_1fr]">
-            <label className="text-sm">Category<select name="category" className={small} defaultValue="notice">{SIGN_CATEGORIES.map((c) => <option key={c} value={c}>{signLabels[c]}</option>)}</select></label>
-            <label className="text-sm">x (m)<input name="x" inputMode="decimal" required className={small} /></label>
-            <label className="text-sm">y (m)<input name="y" inputMode="decimal" required className={small} /></label>
-            <label className="text-sm">Where<input name="where" maxLength={200} className={small} /></label>
+            <label className="text-sm">Category<select name="category" className={`${small} w-full`} defaultValue="notice">{SIGN_CATEGORIES.map((c) => <option key={c} value={c}>{signLabels[c]}</option>)}</select></label>
+            <label className="text-sm">x (m)<input name="x" inputMode="decimal" required className={`${small} w-full`} /></label>
+            <label className="text-sm">y (m)<input name="y" inputMode="decimal" required className={`${small} w-full`} /></label>
+            <label className="text-sm">Where<input name="where" maxLength={200} className={`${small} w-full`} /></label>
           </div>
-          <label className="block text-sm">Note<input name="note" maxLength={500} className={small} /></label>
+          <label className="block text-sm">Note<input name="note" maxLength={500} className={`${small} w-full`} /></label>
           <Button type="submit" tone="secondary" disabled={busy}>Add the sign</Button>
         </Form>
       ) : null}

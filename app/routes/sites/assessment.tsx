@@ -8,6 +8,7 @@ import { AssessmentTables } from "~/features/assessments/assessment-tables";
 import { ClassLegend, ClassMap } from "~/features/assessments/class-map";
 import { MitigationEditor } from "~/features/assessments/mitigation-editor";
 import { mitigationEditSchema, signAddSchema } from "~/features/assessments/schemas";
+import { figure } from "~/features/assessments/format";
 import { assessmentView } from "~/features/assessments/view";
 import { requireMember } from "~/features/auth/guard.server";
 import { describeHeights, standardLabels, tierLabels } from "~/features/exposure/options";
@@ -74,7 +75,7 @@ export default function Assessment({ loaderData, actionData }: Route.ComponentPr
       <Card title="Worst point">
         {view.summary.worstAt ? (
           <p className="text-base">
-            <span className="figures text-2xl font-bold">{view.summary.worstPercent.toPrecision(4)} %</span> of the {view.tier === "general" ? "general-population" : "occupational"} limit, at x = {view.summary.worstAt.x} m, y = {view.summary.worstAt.y} m, z = {view.summary.worstAt.z} m on {surfaceName(view.summary.worstAt.surfaceId)}.
+            <span className="figures text-2xl font-bold">{figure(view.summary.worstPercent)} %</span> of the {view.tier === "general" ? "general-population" : "occupational"} limit, at x = {view.summary.worstAt.x} m, y = {view.summary.worstAt.y} m, z = {view.summary.worstAt.z} m on {surfaceName(view.summary.worstAt.surfaceId)}.
           </p>
         ) : (
           <p>No emitter was on air, so nothing was evaluated.</p>
