@@ -227,7 +227,10 @@ describe("the mitigation plan, edited on the assessment page", () => {
       "signs[1].id": second.id, "signs[1].category": second.category, "signs[1].x": String(second.x), "signs[1].y": String(second.y), "signs[1].remove": "on",
     });
     expect(saved.status).toBe(302);
-    const added = await post({ intent: "add-sign", mitigationVersion: "2", category: "notice", x: "1", y: "1", where: "Stair landing", note: "" });
+    const deck = x.runs[1].surfaceId;
+    const elsewhere = await post({ intent: "add-sign", mitigationVersion: "2", surfaceId: "not-a-surface", category: "notice", x: "1", y: "1" });
+    expect(elsewhere.status).toBe(400);
+    const added = await post({ intent: "add-sign", mitigationVersion: "2", surfaceId: deck, category: "notice", x: "1", y: "1", where: "Stair landing", note: "" });
     expect(added.status).toBe(302);
     const stale = await post({ intent: "add-sign", mitigationVersion: "2", category: "notice", x: "1", y: "1" });
     expect(stale.status).toBe(409);
@@ -236,7 +239,7 @@ describe("the mitigation plan, edited on the assessment page", () => {
     expect(plan.notes).toBe("Barriers to be fitted by the landlord's contractor.");
     expect(plan.signs.find((s: { id: string }) => s.id === first.id)).toMatchObject({ category: "caution", x: 3.5, y: 4, where: "Moved to the parapet" });
     expect(plan.signs.find((s: { id: string }) => s.id === second.id)).toBeUndefined();
-    expect(plan.signs.at(-1)).toMatchObject({ category: "notice", x: 1, y: 1, origin: "engineer", where: "Stair landing" });
+    expect(plan.signs.at(-1)).toMatchObject({ category: "notice", x: 1, y: 1, z: 3, surfaceId: deck, origin: "engineer", where: "Stair landing" });
     expect(plan.signs).toHaveLength(x.mitigation.signs.length);
     expect(plan.barriers).toEqual([]); // none ticked to keep
     const bad = await post({ intent: "add-sign", mitigationVersion: "3", category: "danger", x: "north", y: "1" });

@@ -15,7 +15,9 @@ export function replyErrors(result: SubmissionResult<string[]> | null | undefine
   return Object.entries(result.error).flatMap(([field, messages]) => (messages ?? []).map((m) => (field ? `${field}: ${m}` : m)));
 }
 
-export function MitigationEditor({ plan, version, canEdit, result, labelOf }: { plan: MitigationPlan; version: number; canEdit: boolean; result?: SubmissionResult<string[]> | null; labelOf: (id: string) => string }) {
+type Props = { plan: MitigationPlan; version: number; canEdit: boolean; result?: SubmissionResult<string[]> | null; labelOf: (id: string) => string; surfaces: { id: string; name: string }[] };
+
+export function MitigationEditor({ plan, version, canEdit, result, labelOf, surfaces }: Props) {
   const navigation = useNavigation();
   const busy = navigation.state !== "idle" && navigation.formMethod === "POST";
   const errors = replyErrors(result);
@@ -92,7 +94,8 @@ export function MitigationEditor({ plan, version, canEdit, result, labelOf }: { 
           <h4 className="font-semibold">Add a sign</h4>
           <input type="hidden" name="intent" value="add-sign" />
           <input type="hidden" name="mitigationVersion" value={version} />
-          <div className="grid gap-2 sm:grid-cols-[10rem_6rem_6rem_1fr]">
+          <div className="grid gap-2 sm:grid-cols-[12rem_10rem_6rem_6rem_1fr]">
+            <label className="text-sm">Surface<select name="surfaceId" className={`${small} w-full`}>{surfaces.map((s) => <option key={s.id} value={s.id}>{s.name}</option>)}</select></label>
             <label className="text-sm">Category<select name="category" className={`${small} w-full`} defaultValue="notice">{SIGN_CATEGORIES.map((c) => <option key={c} value={c}>{signLabels[c]}</option>)}</select></label>
             <label className="text-sm">x (m)<input name="x" inputMode="decimal" required className={`${small} w-full`} /></label>
             <label className="text-sm">y (m)<input name="y" inputMode="decimal" required className={`${small} w-full`} /></label>

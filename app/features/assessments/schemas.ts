@@ -46,9 +46,10 @@ export const mitigationEditSchema = z.strictObject({
 });
 export type MitigationEdit = z.output<typeof mitigationEditSchema>;
 
-/** One sign added to the plan. */
+/** One sign added to the plan, on one of the assessment's surfaces (none: the site's datum level). */
 export const signAddSchema = z.strictObject({
   mitigationVersion: version,
+  surfaceId: z.string().max(64).optional(),
   category: signEditSchema.shape.category,
   x: coordinate("x in metres"),
   y: coordinate("y in metres"),

@@ -98,7 +98,7 @@ export default function Assessment({ loaderData, actionData }: Route.ComponentPr
       </section>
       <section id="plan" aria-labelledby="plan-title" className="space-y-3">
         <h3 id="plan-title" className="text-lg font-semibold">Mitigation plan</h3>
-        <MitigationEditor plan={view.mitigation} version={view.mitigationVersion} canEdit={canEdit} result={actionData} labelOf={labelOf} />
+        <MitigationEditor plan={view.mitigation} version={view.mitigationVersion} canEdit={canEdit} result={actionData} labelOf={labelOf} surfaces={view.surfaces.filter((s) => s.map).map((s) => ({ id: s.surfaceId, name: s.name }))} />
       </section>
     </article>
   );
