@@ -215,6 +215,24 @@ describe("frozen means frozen", () => {
   });
 });
 
+describe("PATCH /api/v1/assessments/:id (the mitigation plan only)", () => {
+  it("changes what it is given, keeps the rest, refuses a stale version, other roles and other organisations", async () => {
+    const x = (await freeze({ ...quick, name: "Plan by API" })).body.assessment;
+    const patch = (json: unknown, auth: Auth = as(a, "engineer")) => callApi(assessmentApi, "PATCH", `/api/v1/assessments/${x.id}`, { auth, json, params: { assessmentId: x.id } });
+    const sign = x.mitigation.signs[0];
+    const got = await patch({ mitigationVersion: 1, signs: [{ id: sign.id, category: sign.category, x: 2, y: 3, where: sign.where, note: sign.note }] });
+    expect(got.status).toBe(200);
+    expect(got.body.assessment.mitigation.version).toBe(2);
+    expect(got.body.assessment.mitigation.signs[0]).toMatchObject({ id: sign.id, x: 2, y: 3 });
+    expect(got.body.assessment.mitigation.barriers).toEqual(x.mitigation.barriers); // not given: kept
+    expect(got.body.assessment.runs).toEqual(x.runs);
+    expect((await patch({ mitigationVersion: 1, notes: "late" })).status).toBe(409);
+    expect((await patch({ mitigationVersion: 2, signs: [{ id: sign.id, category: "danger", x: 0, y: 0 }] })).body.error.fields).toEqual({ "signs[0].category": "Choose a sign: information, notice, caution, warning." });
+    expect((await patch({ mitigationVersion: 2, notes: "x" }, as(a, "billing"))).status).toBe(403);
+    expect((await patch({ mitigationVersion: 2, notes: "x" }, as(b, "owner"))).status).toBe(404);
+  });
+});
+
 describe("the mitigation plan, edited on the assessment page", () => {
   it("moves, re-categorises and removes signs, adds one, keeps chosen barriers, and refuses a stale version", async () => {
     const x = (await freeze({ ...quick, name: "Plan edits" })).body.assessment;

@@ -44,7 +44,14 @@ export const mitigationEditSchema = z.strictObject({
   signs: z.array(signEditSchema).max(500, "Keep at most 500 signs.").default([]),
   keepBarriers: z.array(z.string().max(20)).max(500).default([]),
 });
-export type MitigationEdit = z.output<typeof mitigationEditSchema>;
+/** The API's PATCH: what is left out stays as it is (the page's form always sends the whole plan). */
+export const mitigationPatchSchema = z.strictObject({
+  mitigationVersion: version,
+  notes: text(4000).optional(),
+  signs: z.array(signEditSchema.extend({ id: z.string({ error: "Name the sign by its id." }).max(20) })).max(500, "Keep at most 500 signs.").optional(),
+  keepBarriers: z.array(z.string().max(20)).max(500).optional(),
+});
+export type MitigationEdit = z.output<typeof mitigationPatchSchema>;
 
 /** One sign added to the plan, on one of the assessment's surfaces (none: the site's datum level). */
 export const signAddSchema = z.strictObject({
