@@ -53,11 +53,16 @@ test("freeze the demo rooftop, edit the plan, change an emitter, freeze again an
 
   // Edit the plan: re-categorise the first sign and add a note.
   await page.getByRole("combobox", { name: "Category of s1", exact: true }).selectOption("warning");
-  await page.getByLabel("Notes").fill("Landlord to fit the barrier before the next visit.");
-  await page.getByRole("button", { name: "Save the plan" }).click();
+  await page.getByRole("button", { name: "Save s1", exact: true }).click();
   await expect(page.getByText("Mitigation plan saved.")).toBeVisible({ timeout: 30_000 });
   await expect(page.getByRole("combobox", { name: "Category of s1", exact: true })).toHaveValue("warning");
+  await page.getByLabel("Notes").fill("Landlord to fit the barrier before the next visit.");
+  await page.getByRole("button", { name: "Save the notes" }).click();
+  await expect(page.getByText("Mitigation plan saved.")).toBeVisible({ timeout: 30_000 });
+  await page.waitForLoadState("networkidle");
+  await page.reload(); // what was stored, not what was typed
   await expect(page.getByLabel("Notes")).toHaveValue("Landlord to fit the barrier before the next visit.");
+  await expect(page.getByRole("combobox", { name: "Category of s1", exact: true })).toHaveValue("warning");
 
   await setPower(20);
   await page.getByRole("link", { name: "Assessments", exact: true }).first().click();

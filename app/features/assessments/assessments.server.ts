@@ -62,7 +62,7 @@ async function changePlan(who: Actor & Scope, id: string, version: number, chang
   });
 }
 
-/** Saves the edited plan: signs moved, re-categorised or removed, barriers kept, notes (each left as it is when not given). */
+/** Saves an edit of the plan: signs moved, re-categorised or removed, barriers removed, notes (what is not given stays). */
 export function updateMitigation(who: Actor & Scope, id: string, edit: MitigationEdit) {
   return changePlan(who, id, edit.mitigationVersion, (plan) => {
     const edited = new Map((edit.signs ?? []).filter((s) => s.id).map((s) => [s.id!, s]));
@@ -76,8 +76,8 @@ export function updateMitigation(who: Actor & Scope, id: string, edit: Mitigatio
       if (e.remove) continue;
       signs.push({ ...sign, category: e.category, x: e.x, y: e.y, where: e.where, note: e.note });
     }
-    const keep = edit.keepBarriers ? new Set(edit.keepBarriers) : null;
-    return { ...plan, signs, barriers: keep ? plan.barriers.filter((b) => keep.has(b.id)) : plan.barriers, notes: edit.notes ?? plan.notes };
+    const drop = new Set(edit.removeBarriers ?? []);
+    return { ...plan, signs, barriers: plan.barriers.filter((b) => !drop.has(b.id)), notes: edit.notes ?? plan.notes };
   });
 }
 

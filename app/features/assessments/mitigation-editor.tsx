@@ -40,54 +40,71 @@ export function MitigationEditor({ plan, version, canEdit, result, labelOf, surf
           </ul>
         )}
       </div>
-      <Form method="post" className="space-y-4" aria-label="Mitigation plan">
+      <FormErrors errors={errors} />
+      <div>
+        <h4 className="mb-1 font-semibold">Signs ({plan.signs.length})</h4>
+        <p className="mb-2 text-sm text-graphite-600">Each row is saved on its own: change the category, move it (x, y in site metres), say where it stands.</p>
+        <div className="overflow-x-auto rounded-sheet border border-rule bg-sheet">
+          <table className="min-w-full text-sm">
+            <caption className="sr-only">Signs</caption>
+            <thead className="border-b border-ink-900">
+              <tr>{["Sign", "Category", "x (m)", "y (m)", "Where", "Note", ""].map((h, k) => <th key={k} scope="col" className="label-caps px-2 py-2 text-left font-medium">{h}</th>)}</tr>
+            </thead>
+            <tbody>
+              {plan.signs.map((s) => {
+                const form = `sign-${s.id}`;
+                return (
+                  <tr key={`${s.id}-${version}`} className="border-b border-rule align-top last:border-b-0">
+                    <td className="px-2 py-2 figures">{s.id}<span className="block text-xs text-graphite-500">{s.origin}</span></td>
+                    <td className="px-2 py-2"><select form={form} aria-label={`Category of ${s.id}`} name="signs[0].category" defaultValue={s.category} disabled={!canEdit} className={`${small} w-44`}>{SIGN_CATEGORIES.map((c) => <option key={c} value={c}>{signLabels[c]}</option>)}</select></td>
+                    <td className="px-2 py-2"><input form={form} aria-label={`x of ${s.id}`} name="signs[0].x" defaultValue={s.x} inputMode="decimal" disabled={!canEdit} className={`${small} w-24`} /></td>
+                    <td className="px-2 py-2"><input form={form} aria-label={`y of ${s.id}`} name="signs[0].y" defaultValue={s.y} inputMode="decimal" disabled={!canEdit} className={`${small} w-24`} /></td>
+                    <td className="px-2 py-2"><input form={form} aria-label={`Where ${s.id} stands`} name="signs[0].where" defaultValue={s.where} maxLength={200} disabled={!canEdit} className={`${small} w-60`} /></td>
+                    <td className="px-2 py-2"><input form={form} aria-label={`Note on ${s.id}`} name="signs[0].note" defaultValue={s.note} maxLength={500} disabled={!canEdit} className={`${small} w-60`} /></td>
+                    <td className="px-2 py-2">
+                      {canEdit ? (
+                        <Form method="post" id={form} className="flex gap-1">
+                          <input type="hidden" name="intent" value="save-plan" />
+                          <input type="hidden" name="mitigationVersion" value={version} />
+                          <input type="hidden" name="signs[0].id" value={s.id} />
+                          <Button type="submit" tone="secondary" size="sm" disabled={busy} aria-label={`Save ${s.id}`}>Save</Button>
+                          <Button type="submit" tone="quiet" size="sm" name="signs[0].remove" value="on" disabled={busy} aria-label={`Remove ${s.id}`}>Remove</Button>
+                        </Form>
+                      ) : null}
+                    </td>
+                  </tr>
+                );
+              })}
+            </tbody>
+          </table>
+        </div>
+      </div>
+      <div>
+        <h4 className="mb-2 font-semibold">Barriers</h4>
+        {plan.barriers.length === 0 ? <p className="text-sm text-graphite-600">None proposed.</p> : (
+          <ul className="space-y-1 text-sm">
+            {plan.barriers.map((b) => (
+              <li key={b.id} className="flex flex-wrap items-center gap-2">
+                <span>{b.id}: along the {b.boundary === "general" ? "general-population" : "occupational"} 100 % line, <span className="figures">{b.lengthM.toFixed(1)} m</span> in {b.lines.length} run{b.lines.length === 1 ? "" : "s"}</span>
+                {canEdit ? (
+                  <Form method="post">
+                    <input type="hidden" name="intent" value="save-plan" />
+                    <input type="hidden" name="mitigationVersion" value={version} />
+                    <input type="hidden" name="removeBarriers[0]" value={b.id} />
+                    <Button type="submit" tone="quiet" size="sm" disabled={busy} aria-label={`Remove barrier ${b.id}`}>Remove</Button>
+                  </Form>
+                ) : null}
+              </li>
+            ))}
+          </ul>
+        )}
+      </div>
+      <Form method="post" className="space-y-2">
         <input type="hidden" name="intent" value="save-plan" />
         <input type="hidden" name="mitigationVersion" value={version} />
-        <FormErrors errors={errors} />
-        <div>
-          <h4 className="mb-2 font-semibold">Signs ({plan.signs.length})</h4>
-          <div className="overflow-x-auto rounded-sheet border border-rule bg-sheet">
-            <table className="min-w-full text-sm">
-              <caption className="sr-only">Signs</caption>
-              <thead className="border-b border-ink-900">
-                <tr>{["Sign", "Category", "x (m)", "y (m)", "Where", "Note", "Remove"].map((h) => <th key={h} scope="col" className="label-caps px-2 py-2 text-left font-medium">{h}</th>)}</tr>
-              </thead>
-              <tbody>
-                {plan.signs.map((s, i) => (
-                  <tr key={s.id} className="border-b border-rule align-top last:border-b-0">
-                    <td className="px-2 py-2 figures">{s.id}<input type="hidden" name={`signs[${i}].id`} value={s.id} /><span className="block text-xs text-graphite-500">{s.origin}</span></td>
-                    <td className="px-2 py-2"><select aria-label={`Category of ${s.id}`} name={`signs[${i}].category`} defaultValue={s.category} disabled={!canEdit} className={`${small} w-44`}>{SIGN_CATEGORIES.map((c) => <option key={c} value={c}>{signLabels[c]}</option>)}</select></td>
-                    <td className="px-2 py-2"><input aria-label={`x of ${s.id}`} name={`signs[${i}].x`} defaultValue={s.x} inputMode="decimal" disabled={!canEdit} className={`${small} w-24`} /></td>
-                    <td className="px-2 py-2"><input aria-label={`y of ${s.id}`} name={`signs[${i}].y`} defaultValue={s.y} inputMode="decimal" disabled={!canEdit} className={`${small} w-24`} /></td>
-                    <td className="px-2 py-2"><input aria-label={`Where ${s.id} stands`} name={`signs[${i}].where`} defaultValue={s.where} maxLength={200} disabled={!canEdit} className={`${small} w-60`} /></td>
-                    <td className="px-2 py-2"><input aria-label={`Note on ${s.id}`} name={`signs[${i}].note`} defaultValue={s.note} maxLength={500} disabled={!canEdit} className={`${small} w-60`} /></td>
-                    <td className="px-2 py-2 text-center"><input type="checkbox" aria-label={`Remove ${s.id}`} name={`signs[${i}].remove`} disabled={!canEdit} className="h-5 w-5" /></td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
-        </div>
-        <fieldset>
-          <legend className="mb-2 font-semibold">Barriers</legend>
-          {plan.barriers.length === 0 ? <p className="text-sm text-graphite-600">None proposed.</p> : (
-            <ul className="space-y-1 text-sm">
-              {plan.barriers.map((b) => (
-                <li key={b.id}>
-                  <label className="flex items-start gap-2">
-                    <input type="checkbox" name="keepBarriers" value={b.id} defaultChecked disabled={!canEdit} className="mt-0.5 h-5 w-5" />
-                    <span>{b.id}: along the {b.boundary === "general" ? "general-population" : "occupational"} 100 % line, <span className="figures">{b.lengthM.toFixed(1)} m</span> in {b.lines.length} run{b.lines.length === 1 ? "" : "s"}</span>
-                  </label>
-                </li>
-              ))}
-            </ul>
-          )}
-        </fieldset>
-        <div>
-          <label htmlFor="plan-notes" className="mb-1 block text-sm font-medium">Notes</label>
-          <textarea id="plan-notes" name="notes" rows={3} maxLength={4000} defaultValue={plan.notes} disabled={!canEdit} className={controlClass} />
-        </div>
-        {canEdit ? <Button type="submit" disabled={busy}>Save the plan</Button> : null}
+        <label htmlFor="plan-notes" className="block text-sm font-medium">Notes</label>
+        <textarea key={version} id="plan-notes" name="notes" rows={3} maxLength={4000} defaultValue={plan.notes} disabled={!canEdit} className={controlClass} />
+        {canEdit ? <Button type="submit" disabled={busy}>Save the notes</Button> : null}
       </Form>
       {canEdit ? (
         <Form method="post" className="space-y-2 rounded-sheet border border-rule bg-sheet p-3" aria-label="Add a sign">

@@ -7,7 +7,7 @@ import { addSign, findAssessment, requireAssessment, updateMitigation } from "~/
 import { AssessmentTables } from "~/features/assessments/assessment-tables";
 import { ClassLegend, ClassMap } from "~/features/assessments/class-map";
 import { MitigationEditor } from "~/features/assessments/mitigation-editor";
-import { mitigationEditSchema, signAddSchema } from "~/features/assessments/schemas";
+import { mitigationPatchSchema, signAddSchema } from "~/features/assessments/schemas";
 import { figure } from "~/features/assessments/format";
 import { assessmentView } from "~/features/assessments/view";
 import { requireMember } from "~/features/auth/guard.server";
@@ -33,7 +33,7 @@ export async function action({ request, params, context }: Route.ActionArgs) {
   const member = await requireMember({ request, context }, { roles: inventoryEditors });
   const formData = await readFormData(request);
   const adding = formData.get("intent") === "add-sign";
-  const submission = adding ? await parseForm(formData, signAddSchema) : await parseForm(formData, mitigationEditSchema);
+  const submission = adding ? await parseForm(formData, signAddSchema) : await parseForm(formData, mitigationPatchSchema);
   if (submission.status !== "success") return data(submission.reply(), { status: 400 });
   try {
     await requireAssessment(scopeOf(member), params.assessmentId, params.siteId);

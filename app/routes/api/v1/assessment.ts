@@ -1,5 +1,5 @@
 // GET /api/v1/assessments/:id → { assessment: { id, siteId, name, standard, tier, createdAt, author, options, inventory, runs, summary, mitigation } }
-// PATCH /api/v1/assessments/:id { mitigationVersion, notes?, signs?: [{ id, category, x, y, where?, note?, remove? }], keepBarriers?: [ids] } → { assessment }
+// PATCH /api/v1/assessments/:id { mitigationVersion, notes?, signs?: [{ id, category, x, y, where?, note?, remove? }], removeBarriers?: [ids] } → { assessment }
 import { findAssessment, updateMitigation } from "~/features/assessments/assessments.server";
 import { assessmentJson } from "~/features/assessments/json";
 import { mitigationPatchSchema } from "~/features/assessments/schemas";
