@@ -48,7 +48,7 @@ export function MitigationEditor({ plan, version, canEdit, result, labelOf, surf
           <table className="min-w-full text-sm">
             <caption className="sr-only">Signs</caption>
             <thead className="border-b border-ink-900">
-              <tr>{["Sign", "Category", "x (m)", "y (m)", "Where", "Note", ""].map((h, k) => <th key={k} scope="col" className="label-caps px-2 py-2 text-left font-medium">{h}</th>)}</tr>
+              <tr>{["Sign", "Category", "x (m)", "y (m)", "Where", "Note", "Save or remove"].map((h, k) => <th key={k} scope="col" className="label-caps px-2 py-2 text-left font-medium">{h}</th>)}</tr>
             </thead>
             <tbody>
               {plan.signs.map((s) => {
