@@ -56,11 +56,11 @@ export function MitigationEditor({ plan, version, canEdit, result, labelOf, surf
                 return (
                   <tr key={`${s.id}-${version}`} className="border-b border-rule align-top last:border-b-0">
                     <td className="px-2 py-2 figures">{s.id}<span className="block text-xs text-graphite-500">{s.origin}</span></td>
-                    <td className="px-2 py-2"><select form={form} aria-label={`Category of ${s.id}`} name="signs[0].category" defaultValue={s.category} disabled={!canEdit} className={`${small} w-44`}>{SIGN_CATEGORIES.map((c) => <option key={c} value={c}>{signLabels[c]}</option>)}</select></td>
-                    <td className="px-2 py-2"><input form={form} aria-label={`x of ${s.id}`} name="signs[0].x" defaultValue={s.x} inputMode="decimal" disabled={!canEdit} className={`${small} w-24`} /></td>
-                    <td className="px-2 py-2"><input form={form} aria-label={`y of ${s.id}`} name="signs[0].y" defaultValue={s.y} inputMode="decimal" disabled={!canEdit} className={`${small} w-24`} /></td>
-                    <td className="px-2 py-2"><input form={form} aria-label={`Where ${s.id} stands`} name="signs[0].where" defaultValue={s.where} maxLength={200} disabled={!canEdit} className={`${small} w-60`} /></td>
-                    <td className="px-2 py-2"><input form={form} aria-label={`Note on ${s.id}`} name="signs[0].note" defaultValue={s.note} maxLength={500} disabled={!canEdit} className={`${small} w-60`} /></td>
+                    <td className="px-2 py-2"><select form={form} aria-label={`Category of ${s.id}`} name="signs[0].category" defaultValue={s.category} disabled={!canEdit} className={`${small} w-40`}>{SIGN_CATEGORIES.map((c) => <option key={c} value={c}>{signLabels[c]}</option>)}</select></td>
+                    <td className="px-2 py-2"><input form={form} aria-label={`x of ${s.id}`} name="signs[0].x" defaultValue={s.x} inputMode="decimal" disabled={!canEdit} className={`${small} w-20`} /></td>
+                    <td className="px-2 py-2"><input form={form} aria-label={`y of ${s.id}`} name="signs[0].y" defaultValue={s.y} inputMode="decimal" disabled={!canEdit} className={`${small} w-20`} /></td>
+                    <td className="px-2 py-2"><input form={form} aria-label={`Where ${s.id} stands`} name="signs[0].where" defaultValue={s.where} maxLength={200} disabled={!canEdit} className={`${small} w-48`} /></td>
+                    <td className="px-2 py-2"><input form={form} aria-label={`Note on ${s.id}`} name="signs[0].note" defaultValue={s.note} maxLength={500} disabled={!canEdit} className={`${small} w-48`} /></td>
                     <td className="px-2 py-2">
                       {canEdit ? (
                         <Form method="post" id={form} className="flex gap-1">
