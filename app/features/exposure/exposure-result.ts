@@ -1,0 +1,142 @@
+// What the Exposure page draws, computed from the inventory, the options and any what-if edits:
+// per surface the grid (lean: plain numbers to three significant figures), classes, worst point
+// and contributions; per emitter its figures and pattern; the readings against predictions.
+// Pure: the loader runs it for the stored inventory and the what-if worker for the edited one.
+import { evaluate, type EmitterInput } from "~/engine";
+import type { EnginePattern } from "~/infra/db/schema/emitters";
+import { emitterPattern, engineEmitters, type InventoryEmitter } from "./engine-inputs";
+import { evaluateSite, type Areas, type Contribution } from "./evaluate-site";
+import type { ExposureOptions } from "./options";
+import { compareReadings, readingsRequest, type ReadingComparison, type ReadingsSummary, type SiteReading } from "./readings";
+import { facadeAxes, type LayoutSurface, type XY } from "./requests";
+import { applyWhatIf, cleanEdits, type WhatIfEdits } from "./what-if";
+
+/** Everything the computation needs, small enough to send to the browser for the what-if worker. */
+export type ExposureInput = {
+  options: ExposureOptions;
+  surfaces: LayoutSurface[];
+  emitters: InventoryEmitter[];
+  patterns: [string, EnginePattern][];
+  readings: SiteReading[];
+};
+
+type Worst = { worstPercent: number; worstAt: { x: number; y: number; z: number } | null; worstClass: number; areas: Areas; contributions: Contribution[] };
+export type AreaView = Worst & {
+  surfaceId: string;
+  name: string;
+  elevationM: number;
+  polygon: XY[];
+  grid: { nx: number; ny: number; x0: number; y0: number; step: number };
+  /** Row-major (j·nx + i), % of the chosen tier's limit to three significant figures (below 0.01 %: 0). */
+  percent: number[];
+  /** 0–3 (the four classes), 255 outside the outline. */
+  classes: number[];
+};
+export type FacadeView = Worst & { surfaceId: string; name: string; line: [XY, XY]; along: number[]; heights: number[]; percent: number[]; classes: number[] };
+export type EmitterView = {
+  inventoryId: string;
+  /** The engine's id (the label, made unique), which contributions name; null when left out. */
+  engineId: string | null;
+  label: string;
+  frequencyMHz: number;
+  eirpW: number | null;
+  erpW: number | null;
+  complianceDistanceM: { general: number; occupational: number } | null;
+  x: number;
+  y: number;
+  z: number;
+  azimuthDeg: number;
+  tiltDeg: number;
+  pattern: EnginePattern;
+  active: boolean;
+};
+export type ExposureResult = {
+  areas: AreaView[];
+  facades: FacadeView[];
+  emitters: EmitterView[];
+  summary: { worstPercent: number; worstAt: { x: number; y: number; z: number; surfaceId: string; surfaceName: string } | null };
+  readings: ReadingComparison[];
+  readingsSummary: ReadingsSummary;
+  /** The engine's emitters, for the point values under the pointer. */
+  engineEmitters: EmitterInput[];
+  edits: WhatIfEdits;
+};
+
+const lean = (v: number) => (v < 0.01 ? 0 : Number(v.toPrecision(3)));
+const r3 = (v: number) => Math.round(v * 1000) / 1000;
+
+export function computeExposure(input: ExposureInput, editsIn: WhatIfEdits = {}): ExposureResult {
+  const edits = cleanEdits(input.emitters, editsIn);
+  const emitters = applyWhatIf(input.emitters, edits);
+  const patterns = new Map(input.patterns);
+  const o = input.options;
+  const site = evaluateSite({ surfaces: input.surfaces, emitters, patterns }, o);
+  const surfaceById = new Map(input.surfaces.map((s) => [s.id, s]));
+  const { emitters: engineList } = engineEmitters(emitters, patterns, o);
+
+  const areas: AreaView[] = [];
+  const facades: FacadeView[] = [];
+  for (const s of site.surfaces) {
+    const surface = surfaceById.get(s.surfaceId)!;
+    const worst: Worst = { worstPercent: s.worstPercent, worstAt: s.worstAt, worstClass: s.worstClass, areas: s.areas, contributions: s.contributions };
+    if (s.kind === "area") {
+      const g = site.runs.find((r) => r.surfaceId === s.surfaceId)!.response.grid!;
+      areas.push({
+        ...worst,
+        surfaceId: s.surfaceId,
+        name: s.name,
+        elevationM: surface.elevationM ?? 0,
+        polygon: surface.polygon ?? [],
+        grid: { nx: g.nx, ny: g.ny, x0: g.x0, y0: g.y0, step: g.step },
+        percent: g.percent.map((p, i) => (s.classes[i] === 255 ? 0 : lean(p))),
+        classes: s.classes,
+      });
+    } else {
+      const run = site.runs.find((r) => r.surfaceId === s.surfaceId)!;
+      const axes = facadeAxes(surface, o);
+      facades.push({ ...worst, surfaceId: s.surfaceId, name: s.name, line: surface.line!, along: axes.along, heights: axes.heights, percent: (run.response.points ?? []).map((p) => lean(p.totalPercent)), classes: s.classes });
+    }
+  }
+
+  const byInventory = new Map(site.emitters.map((e) => [e.inventoryId, e]));
+  const emitterViews: EmitterView[] = emitters.map((e) => {
+    const summary = byInventory.get(e.id);
+    return {
+      inventoryId: e.id,
+      engineId: summary?.id ?? null,
+      label: e.label,
+      frequencyMHz: e.frequencyMHz,
+      eirpW: summary ? r3(summary.eirpW) : null,
+      erpW: summary ? r3(summary.erpW) : null,
+      complianceDistanceM: summary ? { general: r3(summary.complianceDistanceM.general), occupational: r3(summary.complianceDistanceM.occupational) } : null,
+      x: e.x,
+      y: e.y,
+      z: e.z,
+      azimuthDeg: e.azimuthDeg,
+      tiltDeg: e.mechanicalTiltDeg + e.electricalTiltDeg,
+      pattern: emitterPattern(e, patterns),
+      active: e.active,
+    };
+  });
+
+  const request = readingsRequest(input.readings, input.surfaces, engineList, o);
+  const compared = compareReadings(input.readings, input.surfaces, request ? evaluate(request) : null, o);
+  const worstAt = site.summary.worstAt;
+  return {
+    areas,
+    facades,
+    emitters: emitterViews,
+    summary: { worstPercent: site.summary.worstPercent, worstAt: worstAt ? { ...worstAt, surfaceName: surfaceById.get(worstAt.surfaceId)?.name ?? "" } : null },
+    readings: compared.rows,
+    readingsSummary: compared.summary,
+    engineEmitters: engineList,
+    edits,
+  };
+}
+
+/** The areas grouped by elevation, highest level first: one plan each. */
+export function levelsOf(areas: AreaView[]): { elevationM: number; areas: AreaView[] }[] {
+  const map = new Map<number, AreaView[]>();
+  for (const a of areas) map.set(a.elevationM, [...(map.get(a.elevationM) ?? []), a]);
+  return [...map].sort((a, b) => b[0] - a[0]).map(([elevationM, list]) => ({ elevationM, areas: list }));
+}
