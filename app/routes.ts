@@ -27,6 +27,7 @@ export default [
         index("routes/sites/layout.tsx"),
         route("edit", "routes/sites/edit.tsx"),
         route("history", "routes/sites/history.tsx"),
+        route("exposure", "routes/exposure/exposure.tsx"),
         route("visits", "routes/sites/visits.tsx"),
         route("visits/new", "routes/sites/visit-new.tsx"),
         route("visits/:visitId", "routes/sites/visit.tsx"),

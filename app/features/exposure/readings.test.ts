@@ -8,7 +8,7 @@ import type { LayoutSurface } from "./requests";
 
 // EIRP 1000π W isotropic at (0, 0, 6): S = 1000π/(4πR²) = 250/R² W/m². At 1900 MHz the FCC general
 // population limit is 1.0 mW/cm² = 10 W/m² (47 CFR §1.1310(e)(1), Table 1 (B)).
-const emitters: EmitterInput[] = [{ id: "ISO", frequencyMHz: 1900, powerW: 1000 * Math.PI, gainDbi: 0, position: { x: 0, y: 0, z: 6 } }];
+const emitters: EmitterInput[] = [{ id: "ISO", frequencyMHz: 1900, powerW: 1000 * Math.PI, lossDb: 0, gainDbi: 0, position: { x: 0, y: 0, z: 6 }, azimuthDeg: 0, tiltDeg: 0, pattern: "isotropic", model: "spherical", reflectionFactor: 1, dutyFactor: 1 }];
 const surfaces: LayoutSurface[] = [{ id: "upper", name: "Upper", kind: "area", polygon: [[-10, -10], [10, -10], [10, 10], [-10, 10]], line: null, elevationM: 4, bottomM: null, topM: null, access: "workers" }];
 const o = optionsSchema.parse({ standard: "fcc", tier: "general" });
 const reading = (over: Partial<SiteReading>): SiteReading => ({
