@@ -1,6 +1,6 @@
 // Contour assembly from d3-contour on a surface grid, in site metres.
 import { describe, expect, it } from "vitest";
-import { classShapes, contourShapes, extendOutside, labelPoints, ringLength, signedArea, toSite } from "./contours";
+import { classShapes, contourShapes, extendOutside, labelCandidates, ringLength, signedArea, toSite } from "./contours";
 
 const g = { nx: 41, ny: 41, x0: -5, y0: -5, step: 0.25 };
 /** A cone: 200 % at the centre (0, 0), falling by 20 % per metre. */
@@ -26,12 +26,10 @@ describe("contours", () => {
     expect(Math.abs(ringLength(ring) / (2 * Math.PI * 5) - 1)).toBeLessThan(0.05);
   });
 
-  it("labels a ring at its north-most point and skips short rings", () => {
-    const [shape] = contourShapes(g, cone, [150]); // radius 2.5 m
-    const [p] = labelPoints(shape, 1);
-    expect(p[1]).toBeCloseTo(2.5, 0);
-    expect(Math.abs(p[0])).toBeLessThan(0.3);
-    expect(labelPoints(shape, 100)).toEqual([]);
+  it("offers label places evenly along a ring", () => {
+    const square: [number, number][] = [[0, 0], [4, 0], [4, 4], [0, 4], [0, 0]];
+    expect(labelCandidates(square, 4)).toEqual([[2, 0], [4, 2], [2, 4], [0, 2]]);
+    expect(labelCandidates(square, 100)).toEqual([]);
   });
 
   it("fills cells outside the outline from their inside neighbours, so lines reach the edge", () => {

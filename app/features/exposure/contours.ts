@@ -60,14 +60,21 @@ export function contourShapes(g: GridGeometry, values: ArrayLike<number>, thresh
   });
 }
 
-/** Where to write a contour's label: the ring's north-most point (labels then sit on the upper edge of each zone), for rings long enough to carry one. */
-export function labelPoints(shape: ContourShape, minLengthM: number): [number, number][] {
+/** Places along a ring, every `spacingM` metres of its length, where a label may go (the map keeps those inside the surface and clear of others). */
+export function labelCandidates(ring: Ring, spacingM: number): [number, number][] {
   const out: [number, number][] = [];
-  for (const ring of shape.rings) {
-    if (ringLength(ring) < minLengthM) continue;
-    let top = ring[0];
-    for (const p of ring) if (p[1] > top[1]) top = p;
-    out.push(top);
+  let next = spacingM / 2;
+  let walked = 0;
+  for (let k = 1; k < ring.length; k++) {
+    const [x0, y0] = ring[k - 1];
+    const [x1, y1] = ring[k];
+    const d = Math.hypot(x1 - x0, y1 - y0);
+    while (d > 0 && walked + d >= next) {
+      const t = (next - walked) / d;
+      out.push([x0 + (x1 - x0) * t, y0 + (y1 - y0) * t]);
+      next += spacingM;
+    }
+    walked += d;
   }
   return out;
 }

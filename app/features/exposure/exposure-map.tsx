@@ -7,7 +7,7 @@ import { pointInPolygon } from "~/engine";
 import { SitePlan } from "~/features/layout/site-plan";
 import type { PlanFrame, XY } from "~/features/layout/plan-frame";
 import { bandColour, bandThresholds, formatPercent } from "./colour-scale";
-import { classShapes, contourShapes, extendOutside, labelPoints, type Ring } from "./contours";
+import { classShapes, contourShapes, extendOutside, labelCandidates, ringLength, type Ring } from "./contours";
 import type { AreaView, EmitterView, ExposureResult } from "./exposure-result";
 import type { ExposureOptions } from "./options";
 import { pointValue, type PointValue } from "./point-value";
@@ -86,7 +86,9 @@ export function ExposureLevelMap({ title, elevationM, areas, result, options, ob
             {areas.map((a) => (
               <path key={a.surfaceId} d={pathOf(frame, [a.polygon])} fill="none" className="stroke-ink-900" strokeWidth={1.5} />
             ))}
-            {geometry.map((g, k) => g.lines.map((l) => labelPoints(l, 6).map((p, i) => <HaloText key={`${k}-${l.value}-${i}`} frame={frame} at={p} text={`${l.value} %`} bold={l.value === 100} />)))}
+            {contourLabels(frame, geometry, areas, result.emitters).map((l, i) => (
+              <HaloText key={i} frame={frame} at={l.at} text={`${l.percent} %`} bold={l.percent === 100} />
+            ))}
             {levelObstructions.map((o) => (
               <g key={o.id}>
                 <path d={pathOf(frame, [o.polygon])} fill="url(#plan-solid)" className="stroke-graphite-600" strokeWidth={1.25} />
@@ -96,8 +98,8 @@ export function ExposureLevelMap({ title, elevationM, areas, result, options, ob
             {levelAccess.map((a) => (
               <AccessMarker key={a.id} frame={frame} point={a} />
             ))}
-            {result.emitters.map((e) => (
-              <EmitterMarker key={e.inventoryId} frame={frame} emitter={e} />
+            {emitterLabelPlaces(frame, result.emitters).map(({ emitter, dx, dy, anchor }) => (
+              <EmitterMarker key={emitter.inventoryId} frame={frame} emitter={emitter} dx={dx} dy={dy} anchor={anchor} />
             ))}
             {result.readings
               .filter((r) => onLevel(r.z - r.heightM, elevationM) && areas.some((a) => pointInPolygon(r.x, r.y, a.polygon)))
@@ -112,7 +114,7 @@ export function ExposureLevelMap({ title, elevationM, areas, result, options, ob
       <figcaption className="min-h-5 text-sm text-graphite-600" aria-live="polite" data-testid="point-readout">
         {hover
           ? `At (${hover.x.toFixed(1)}, ${hover.y.toFixed(1)}) m: ${formatPercent(hover.totalPercent)}; ${hover.top.map((t) => `${labels.get(t.id) ?? t.id} ${formatPercent(t.percent)}`).join(", ")}`
-          : "Point at the map for the value there and its three largest contributors."}
+          : `${worst?.worstAt ? `Worst on this level: ${formatPercent(worst.worstPercent)} at (${worst.worstAt.x}, ${worst.worstAt.y}) m${worst.worstPercent < 1 ? ", below the colour scale's 1 % (unfilled)" : ""}. ` : ""}Point at the map for the value there and its three largest contributors.`}
       </figcaption>
     </figure>
   );
@@ -128,6 +130,58 @@ function surfaceGeometry(a: AreaView) {
     lines: contourShapes(a.grid, values, CONTOUR_PERCENTS),
     classes: classShapes(a.grid, Array.from(classValues)),
   };
+}
+
+type Box = [number, number, number, number];
+const overlaps = (a: Box, b: Box) => a[0] < b[2] && b[0] < a[2] && a[1] < b[3] && b[1] < a[3];
+
+/** Emitters inside the plan, each label put where it overlaps no earlier one: right, then left, then below, then above. */
+function emitterLabelPlaces(frame: PlanFrame, emitters: EmitterView[]) {
+  const { bounds } = frame;
+  const boxes: Box[] = [];
+  const out: { emitter: EmitterView; dx: number; dy: number; anchor: "start" | "end" }[] = [];
+  for (const e of emitters) {
+    if (e.x < bounds.minX || e.x > bounds.maxX || e.y < bounds.minY || e.y > bounds.maxY) continue;
+    const [px, py] = frame.toPx(e.x, e.y);
+    const w = 6 * (e.label.length + (e.active ? 0 : 6));
+    const tries: [number, number, "start" | "end"][] = [[8, -6, "start"], [-8, -6, "end"], [8, 14, "start"], [-8, 14, "end"], [8, -18, "start"], [-8, -18, "end"]];
+    let chosen = tries[0];
+    for (const t of tries) {
+      const x0 = t[2] === "start" ? px + t[0] : px + t[0] - w;
+      const box: Box = [x0, py + t[1] - 10, x0 + w, py + t[1] + 2];
+      if (!boxes.some((b) => overlaps(b, box))) {
+        chosen = t;
+        boxes.push(box);
+        break;
+      }
+    }
+    out.push({ emitter: e, dx: chosen[0], dy: chosen[1], anchor: chosen[2] });
+  }
+  return out;
+}
+
+/** One label per contour ring long enough to carry one: at a place well inside the surface and at least 40 px from emitters and other labels. */
+function contourLabels(frame: PlanFrame, geometry: ReturnType<typeof surfaceGeometry>[], areas: AreaView[], emitters: EmitterView[]) {
+  const taken: XY[] = emitters.map((e) => frame.toPx(e.x, e.y));
+  const out: { at: XY; percent: number }[] = [];
+  const margin = 12 / frame.scale;
+  const inside = (x: number, y: number) => areas.some((a) => [[-margin, -margin], [margin, -margin], [margin, margin], [-margin, margin]].every(([dx, dy]) => pointInPolygon(x + dx, y + dy, a.polygon)));
+  for (const g of geometry) {
+    for (const line of [...g.lines].sort((a, b) => (a.value === 100 ? -1 : b.value === 100 ? 1 : 0))) {
+      for (const ring of line.rings) {
+        const length = ringLength(ring);
+        if (length * frame.scale < 80) continue;
+        for (const p of labelCandidates(ring, Math.max(length / 12, 1))) {
+          const px = frame.toPx(p[0], p[1]);
+          if (!inside(p[0], p[1]) || taken.some((t) => Math.hypot(t[0] - px[0], t[1] - px[1]) < 40)) continue;
+          taken.push(px);
+          out.push({ at: p, percent: line.value });
+          break;
+        }
+      }
+    }
+  }
+  return out;
 }
 
 function centroid(points: XY[]): XY {
@@ -176,9 +230,7 @@ function AccessMarker({ frame, point }: { frame: PlanFrame; point: MapAccessPoin
 }
 
 /** An emitter: a black diamond and an arrow along its azimuth (clockwise from north); hollow when off. */
-function EmitterMarker({ frame, emitter }: { frame: PlanFrame; emitter: EmitterView }) {
-  const { bounds } = frame;
-  if (emitter.x < bounds.minX || emitter.x > bounds.maxX || emitter.y < bounds.minY || emitter.y > bounds.maxY) return null;
+function EmitterMarker({ frame, emitter, dx: lx, dy: ly, anchor }: { frame: PlanFrame; emitter: EmitterView; dx: number; dy: number; anchor: "start" | "end" }) {
   const [px, py] = frame.toPx(emitter.x, emitter.y);
   const a = (emitter.azimuthDeg * Math.PI) / 180;
   const length = 22;
@@ -190,7 +242,7 @@ function EmitterMarker({ frame, emitter }: { frame: PlanFrame; emitter: EmitterV
       <line x1={px} y1={py} x2={px + dx} y2={py + dy} className="stroke-ink-900" strokeWidth={1.6} strokeDasharray={off ? "3 2" : undefined} />
       <path d="M0 -6L4 2L-4 2Z" transform={`translate(${px + dx} ${py + dy}) rotate(${emitter.azimuthDeg})`} className="fill-ink-900" stroke="#ffffff" strokeWidth={0.8} />
       <path d="M0 -5L5 0L0 5L-5 0Z" transform={`translate(${px} ${py})`} className={off ? "fill-sheet stroke-ink-900" : "fill-ink-900"} stroke="#ffffff" strokeWidth={off ? 1.5 : 1} />
-      <text x={px + 7} y={py - 6} className="fill-ink-900 text-[10px] font-medium" stroke="#ffffff" strokeWidth={3} paintOrder="stroke">
+      <text x={px + lx} y={py + ly} textAnchor={anchor} className="fill-ink-900 text-[10px] font-medium" stroke="#ffffff" strokeWidth={3} paintOrder="stroke">
         {emitter.label}
         {off ? " (off)" : ""}
       </text>

@@ -5,7 +5,7 @@
 import { evaluate, type EmitterInput } from "~/engine";
 import type { EnginePattern } from "~/infra/db/schema/emitters";
 import { emitterPattern, engineEmitters, type InventoryEmitter } from "./engine-inputs";
-import { evaluateSite, type Areas, type Contribution } from "./evaluate-site";
+import { evaluateSite, type Areas, type Contribution, type EmitterSummary } from "./evaluate-site";
 import type { ExposureOptions } from "./options";
 import { compareReadings, readingsRequest, type ReadingComparison, type ReadingsSummary, type SiteReading } from "./readings";
 import { facadeAxes, type LayoutSurface, type XY } from "./requests";
@@ -62,7 +62,13 @@ export type ExposureResult = {
   edits: WhatIfEdits;
 };
 
-const lean = (v: number) => (v < 0.01 ? 0 : Number(v.toPrecision(3)));
+/** Plain numbers for the page: three significant figures, 0 below 0.01 %. */
+export function lean(v: number): number {
+  if (!(v >= 0.01)) return 0;
+  // Number(v.toPrecision(3)) without the string (several times faster on a 20 000-cell grid).
+  const e = Math.floor(Math.log10(v)) - 2;
+  return e >= 0 ? Math.round(v / 10 ** e) * 10 ** e : Math.round(v * 10 ** -e) / 10 ** -e;
+}
 const r3 = (v: number) => Math.round(v * 1000) / 1000;
 
 export function computeExposure(input: ExposureInput, editsIn: WhatIfEdits = {}): ExposureResult {
@@ -98,8 +104,26 @@ export function computeExposure(input: ExposureInput, editsIn: WhatIfEdits = {})
     }
   }
 
-  const byInventory = new Map(site.emitters.map((e) => [e.inventoryId, e]));
-  const emitterViews: EmitterView[] = emitters.map((e) => {
+  const emitterViews = emitterViewsOf(emitters, site.emitters, patterns);
+
+  const compared = readingsOf(input, engineList);
+  const worstAt = site.summary.worstAt;
+  return {
+    areas,
+    facades,
+    emitters: emitterViews,
+    summary: { worstPercent: site.summary.worstPercent, worstAt: worstAt ? { ...worstAt, surfaceName: surfaceById.get(worstAt.surfaceId)?.name ?? "" } : null },
+    readings: compared.rows,
+    readingsSummary: compared.summary,
+    engineEmitters: engineList,
+    edits,
+  };
+}
+
+/** Each inventory emitter (active or not) with its figures from the run; shared with the what-if model. */
+export function emitterViewsOf(emitters: InventoryEmitter[], summaries: EmitterSummary[], patterns: ReadonlyMap<string, EnginePattern>): EmitterView[] {
+  const byInventory = new Map(summaries.map((e) => [e.inventoryId, e]));
+  return emitters.map((e) => {
     const summary = byInventory.get(e.id);
     return {
       inventoryId: e.id,
@@ -118,25 +142,20 @@ export function computeExposure(input: ExposureInput, editsIn: WhatIfEdits = {})
       active: e.active,
     };
   });
-
-  const request = readingsRequest(input.readings, input.surfaces, engineList, o);
-  const compared = compareReadings(input.readings, input.surfaces, request ? evaluate(request) : null, o);
-  const worstAt = site.summary.worstAt;
-  return {
-    areas,
-    facades,
-    emitters: emitterViews,
-    summary: { worstPercent: site.summary.worstPercent, worstAt: worstAt ? { ...worstAt, surfaceName: surfaceById.get(worstAt.surfaceId)?.name ?? "" } : null },
-    readings: compared.rows,
-    readingsSummary: compared.summary,
-    engineEmitters: engineList,
-    edits,
-  };
 }
 
-/** The areas grouped by elevation, highest level first: one plan each. */
+/** The readings against the predictions of these engine emitters. */
+export function readingsOf(input: ExposureInput, engineList: EmitterInput[]) {
+  const request = readingsRequest(input.readings, input.surfaces, engineList, input.options);
+  return compareReadings(input.readings, input.surfaces, request ? evaluate(request) : null, input.options);
+}
+
+/** The areas grouped by elevation, one plan each: the largest level first (the main roof), then the others from the top down. */
 export function levelsOf(areas: AreaView[]): { elevationM: number; areas: AreaView[] }[] {
   const map = new Map<number, AreaView[]>();
   for (const a of areas) map.set(a.elevationM, [...(map.get(a.elevationM) ?? []), a]);
-  return [...map].sort((a, b) => b[0] - a[0]).map(([elevationM, list]) => ({ elevationM, areas: list }));
+  const levels = [...map].map(([elevationM, list]) => ({ elevationM, areas: list, m2: list.reduce((s, a) => s + a.areas.totalM2, 0) }));
+  const largest = levels.reduce<(typeof levels)[number] | null>((m, l) => (!m || l.m2 > m.m2 ? l : m), null);
+  const rest = levels.filter((l) => l !== largest).sort((a, b) => b.elevationM - a.elevationM);
+  return (largest ? [largest, ...rest] : []).map(({ elevationM, areas }) => ({ elevationM, areas }));
 }

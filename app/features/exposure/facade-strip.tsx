@@ -15,8 +15,10 @@ export function FacadeStrip({ facade, width = 960 }: { facade: FacadeView; width
   const span = Math.max(length, 1);
   const scale = Math.min((width - PAD.left - PAD.right) / span, 360 / Math.max(top - bottom, 1));
   const w = span * scale;
+  // The drawing sits in a full-width frame, so its text keeps the size of the plans' text.
+  const shift = Math.max(0, (width - PAD.left - PAD.right - w) / 2);
   const h = Math.max(top - bottom, 0.5) * scale;
-  const toPx = (s: number, z: number): [number, number] => [PAD.left + s * scale, PAD.top + (top - z) * scale];
+  const toPx = (s: number, z: number): [number, number] => [shift + PAD.left + s * scale, PAD.top + (top - z) * scale];
   const g = { nx: along.length, ny: heights.length, x0: 0, y0: bottom, step };
   const pathOf = (rings: Ring[]) => rings.map((r) => r.map((p, i) => `${i ? "L" : "M"}${toPx(p[0], p[1]).map((v) => v.toFixed(1)).join(" ")}`).join("") + "Z").join("");
   const bands = contourShapes(g, facade.percent, bandThresholds());
@@ -32,10 +34,10 @@ export function FacadeStrip({ facade, width = 960 }: { facade: FacadeView; width
   const worstAlong = worst ? Math.hypot(worst.x - facade.line[0][0], worst.y - facade.line[0][1]) : 0;
   const clipId = `facade-${facade.surfaceId}`;
   return (
-    <svg viewBox={`0 0 ${PAD.left + w + PAD.right} ${PAD.top + h + PAD.bottom}`} role="img" aria-label={`${facade.name}: elevation strip, worst ${formatPercent(facade.worstPercent)}`} className="block h-auto w-full max-w-full rounded-sheet border border-rule bg-sheet">
+    <svg viewBox={`0 0 ${Math.max(width, PAD.left + w + PAD.right)} ${PAD.top + h + PAD.bottom}`} role="img" aria-label={`${facade.name}: elevation strip, worst ${formatPercent(facade.worstPercent)}`} className="block h-auto w-full max-w-full rounded-sheet border border-rule bg-sheet">
       <defs>
         <clipPath id={clipId}>
-          <rect x={PAD.left} y={PAD.top} width={w} height={h} />
+          <rect x={shift + PAD.left} y={PAD.top} width={w} height={h} />
         </clipPath>
       </defs>
       <g clipPath={`url(#${clipId})`}>
@@ -43,7 +45,7 @@ export function FacadeStrip({ facade, width = 960 }: { facade: FacadeView; width
         {classes.map((c) => (c.rings.length ? <path key={c.value} d={pathOf(c.rings)} fill="none" className="stroke-ink-900" strokeWidth={c.value === 1 ? 1.4 : 2.2} strokeDasharray={c.value === 1 ? "6 3" : undefined} /> : null))}
         {hundred.rings.length ? <path d={pathOf(hundred.rings)} fill="none" className="stroke-ink-900" strokeWidth={1.6} /> : null}
       </g>
-      <rect x={PAD.left} y={PAD.top} width={w} height={h} fill="none" className="stroke-ink-900" />
+      <rect x={shift + PAD.left} y={PAD.top} width={w} height={h} fill="none" className="stroke-ink-900" />
       {ticks(0, length).map((s) => {
         const [x, y] = toPx(s, bottom);
         return (
@@ -55,7 +57,7 @@ export function FacadeStrip({ facade, width = 960 }: { facade: FacadeView; width
           </g>
         );
       })}
-      <text x={PAD.left + w} y={PAD.top + h + 27} textAnchor="end" className="fill-graphite-600 text-[10px]">
+      <text x={shift + PAD.left + w} y={PAD.top + h + 27} textAnchor="end" className="fill-graphite-600 text-[10px]">
         distance along the facade (m)
       </text>
       {ticks(bottom, top).map((z) => {
@@ -69,7 +71,7 @@ export function FacadeStrip({ facade, width = 960 }: { facade: FacadeView; width
           </g>
         );
       })}
-      <text x={4} y={PAD.top + 8} className="fill-graphite-600 text-[10px]">
+      <text x={shift + 4} y={PAD.top + 8} className="fill-graphite-600 text-[10px]">
         z (m)
       </text>
       {worst ? (

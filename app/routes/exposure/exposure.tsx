@@ -91,11 +91,25 @@ export default function ExposureSection({ loaderData }: Route.ComponentProps) {
             </EmptyState>
           ) : null}
 
-          {levelsOf(result.areas).map((level) => (
-            <Card key={level.elevationM} title={`${level.areas.map((a) => a.name).join(", ")} · level ${signed(level.elevationM)} m`}>
-              <ExposureLevelMap title={`Exposure map of ${site.name}, level ${signed(level.elevationM)} m`} elevationM={level.elevationM} areas={level.areas} result={result} options={options} obstructions={obstructions} accessPoints={accessPoints} />
-            </Card>
-          ))}
+          {levelsOf(result.areas).map((level, k, all) => {
+            const map = (
+              <Card key={level.elevationM} title={`${level.areas.map((a) => a.name).join(", ")} · level ${signed(level.elevationM)} m`}>
+                <ExposureLevelMap title={`Exposure map of ${site.name}, level ${signed(level.elevationM)} m`} elevationM={level.elevationM} areas={level.areas} result={result} options={options} obstructions={obstructions} accessPoints={accessPoints} width={k === 0 ? 960 : 560} />
+              </Card>
+            );
+            if (k === 0) return map;
+            if (k > 1) return null;
+            // The other levels side by side on wide screens.
+            return (
+              <div key="others" className="grid gap-6 lg:grid-cols-2">
+                {all.slice(1).map((l) => (
+                  <Card key={l.elevationM} title={`${l.areas.map((a) => a.name).join(", ")} · level ${signed(l.elevationM)} m`}>
+                    <ExposureLevelMap title={`Exposure map of ${site.name}, level ${signed(l.elevationM)} m`} elevationM={l.elevationM} areas={l.areas} result={result} options={options} obstructions={obstructions} accessPoints={accessPoints} width={560} />
+                  </Card>
+                ))}
+              </div>
+            );
+          })}
 
           {result.facades.map((f) => (
             <Card key={f.surfaceId} title={`${f.name} · facade`}>
