@@ -1,6 +1,7 @@
 // The emitters: figures, compliance distances for both tiers, the pattern as polar diagrams, and
 // the what-if controls (on/off, power in dB or %, azimuth, total downtilt). Edits are not saved.
 import { useEffect, useState } from "react";
+import type { EnginePattern } from "~/infra/db/schema/emitters";
 import type { InventoryEmitter } from "./engine-inputs";
 import type { ExposureResult } from "./exposure-result";
 import { tierLabels, type ExposureOptions } from "./options";
@@ -12,6 +13,7 @@ type Props = {
   result: ExposureResult;
   stored: InventoryEmitter[];
   info: Record<string, { operator: string; band: string }>;
+  patterns: [string, EnginePattern][];
   options: ExposureOptions;
   edits: WhatIfEdits;
   onEdit: (id: string, edit: EmitterEdit | null) => void;
@@ -20,8 +22,9 @@ type Props = {
 const num = `${td} figures text-right whitespace-nowrap`;
 const small = "w-20 rounded-control border border-rule-strong bg-sheet px-2 py-1 text-sm figures text-ink-900 aria-invalid:border-danger-700";
 
-export function EmitterWhatIfTable({ result, stored, info, options, edits, onEdit }: Props) {
+export function EmitterWhatIfTable({ result, stored, info, patterns, options, edits, onEdit }: Props) {
   const views = new Map(result.emitters.map((e) => [e.inventoryId, e]));
+  const library = new Map(patterns);
   const tiers = tierLabels[options.standard];
   return (
     <Table
@@ -58,7 +61,7 @@ export function EmitterWhatIfTable({ result, stored, info, options, edits, onEdi
             <td className={num}>{v?.eirpW != null ? Number(v.eirpW.toPrecision(4)) : "–"}</td>
             <td className={num}>{v?.complianceDistanceM ? v.complianceDistanceM.general.toFixed(2) : "–"}</td>
             <td className={num}>{v?.complianceDistanceM ? v.complianceDistanceM.occupational.toFixed(2) : "–"}</td>
-            <td className={td}>{v ? <PolarDiagrams pattern={v.pattern} azimuthDeg={v.azimuthDeg} tiltDeg={v.tiltDeg} label={s.label} /> : null}</td>
+            <td className={td}>{v ? <PolarDiagrams pattern={"own" in v.pattern ? v.pattern.own : library.get(v.pattern.libraryId)!} azimuthDeg={v.azimuthDeg} tiltDeg={v.tiltDeg} label={s.label} /> : null}</td>
             <td className={td}>{s.active ? <EditControls emitter={s} edit={edit} onEdit={(e) => onEdit(s.id, e)} /> : null}</td>
           </tr>
         );

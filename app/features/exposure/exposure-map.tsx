@@ -3,7 +3,7 @@
 // greyscale, obstructions and access points of the level, emitters with azimuth arrows, readings
 // against predictions, the worst point, and the value under the pointer.
 import { useId, useMemo, useState } from "react";
-import { pointInPolygon } from "~/engine";
+import { pointInPolygon, type EmitterInput } from "~/engine";
 import { SitePlan } from "~/features/layout/site-plan";
 import type { PlanFrame, XY } from "~/features/layout/plan-frame";
 import { bandColour, bandThresholds, formatPercent } from "./colour-scale";
@@ -18,6 +18,8 @@ export type MapAccessPoint = { id: string; name: string; kind: string; x: number
 
 type Props = {
   title: string;
+  /** The engine's emitters of what is drawn (stored or what-if), for the value under the pointer. */
+  engineEmitters: EmitterInput[];
   elevationM: number;
   areas: AreaView[];
   result: ExposureResult;
@@ -31,7 +33,7 @@ type Props = {
 const onLevel = (z: number, level: number) => Math.abs(z - level) <= 0.5;
 const pathOf = (frame: PlanFrame, rings: Ring[]) => rings.map((r) => r.map((p, i) => `${i ? "L" : "M"}${frame.toPx(p[0], p[1]).map((v) => v.toFixed(1)).join(" ")}`).join("") + "Z").join("");
 
-export function ExposureLevelMap({ title, elevationM, areas, result, options, obstructions, accessPoints, width = 960 }: Props) {
+export function ExposureLevelMap({ title, engineEmitters, elevationM, areas, result, options, obstructions, accessPoints, width = 960 }: Props) {
   const uid = useId().replace(/[^a-zA-Z0-9_-]/g, "");
   const [hover, setHover] = useState<PointValue | null>(null);
   const geometry = useMemo(() => areas.map((a) => surfaceGeometry(a)), [areas]);
@@ -43,7 +45,7 @@ export function ExposureLevelMap({ title, elevationM, areas, result, options, ob
     if (!p) return setHover(null);
     const area = areas.find((a) => pointInPolygon(p[0], p[1], a.polygon));
     if (!area) return setHover(null);
-    setHover(pointValue(result.engineEmitters, options, p[0], p[1], area.elevationM));
+    setHover(pointValue(engineEmitters, options, p[0], p[1], area.elevationM));
   };
 
   const worst = areas.reduce<AreaView | null>((w, a) => (a.worstAt && (!w || a.worstPercent > w.worstPercent) ? a : w), null);

@@ -47,7 +47,8 @@ export type EmitterView = {
   z: number;
   azimuthDeg: number;
   tiltDeg: number;
-  pattern: EnginePattern;
+  /** The pattern drawn on the emitter's row: the library pattern's id (its cuts are in the input's `patterns`), else the pattern itself. */
+  pattern: { libraryId: string } | { own: EnginePattern };
   active: boolean;
 };
 export type ExposureResult = {
@@ -57,8 +58,6 @@ export type ExposureResult = {
   summary: { worstPercent: number; worstAt: { x: number; y: number; z: number; surfaceId: string; surfaceName: string } | null };
   readings: ReadingComparison[];
   readingsSummary: ReadingsSummary;
-  /** The engine's emitters, for the point values under the pointer. */
-  engineEmitters: EmitterInput[];
   edits: WhatIfEdits;
 };
 
@@ -115,7 +114,6 @@ export function computeExposure(input: ExposureInput, editsIn: WhatIfEdits = {})
     summary: { worstPercent: site.summary.worstPercent, worstAt: worstAt ? { ...worstAt, surfaceName: surfaceById.get(worstAt.surfaceId)?.name ?? "" } : null },
     readings: compared.rows,
     readingsSummary: compared.summary,
-    engineEmitters: engineList,
     edits,
   };
 }
@@ -138,10 +136,15 @@ export function emitterViewsOf(emitters: InventoryEmitter[], summaries: EmitterS
       z: e.z,
       azimuthDeg: e.azimuthDeg,
       tiltDeg: e.mechanicalTiltDeg + e.electricalTiltDeg,
-      pattern: emitterPattern(e, patterns),
+      pattern: e.patternId ? { libraryId: e.patternId } : { own: emitterPattern(e, patterns) },
       active: e.active,
     };
   });
+}
+
+/** The engine's emitters for an input and edits (for the value under the pointer), built where they are needed rather than sent. */
+export function engineEmittersOf(input: ExposureInput, edits: WhatIfEdits): EmitterInput[] {
+  return engineEmitters(applyWhatIf(input.emitters, edits), new Map(input.patterns), input.options).emitters;
 }
 
 /** The readings against the predictions of these engine emitters. */

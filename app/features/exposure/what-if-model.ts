@@ -96,7 +96,6 @@ export function createWhatIfModel(input: ExposureInput, baseIn?: ExposureResult)
         summary: { worstPercent: worst?.worstPercent ?? 0, worstAt: worst?.worstAt ? { ...worst.worstAt, surfaceId: worst.surfaceId, surfaceName: worst.name } : null },
         readings: compared.rows,
         readingsSummary: compared.summary,
-        engineEmitters: engineList,
         edits,
       };
     },

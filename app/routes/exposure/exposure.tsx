@@ -1,3 +1,4 @@
+import { useMemo } from "react";
 import { Link, NavLink } from "react-router";
 import { Button } from "~/components/button";
 import { RfCautions } from "~/components/cautions";
@@ -8,7 +9,7 @@ import { EmitterWhatIfTable } from "~/features/exposure/emitter-what-if-table";
 import { foldEvaluation } from "~/features/exposure/evaluation-choice";
 import { CLASS_NAMES } from "~/features/exposure/evaluate-site";
 import { ExposureLevelMap } from "~/features/exposure/exposure-map";
-import { levelsOf } from "~/features/exposure/exposure-result";
+import { engineEmittersOf, levelsOf } from "~/features/exposure/exposure-result";
 import { AreasTable, ContributionsTable, ReadingsSummaryNotice, ReadingsTable, signed, WorstPointsTable } from "~/features/exposure/exposure-tables";
 import { FacadeStrip } from "~/features/exposure/facade-strip";
 import { MapLegend } from "~/features/exposure/map-legend";
@@ -34,6 +35,7 @@ export default function ExposureSection({ loaderData }: Route.ComponentProps) {
   const { site, options, errors, input, problem, generatedAt, obstructions, accessPoints, emitterInfo, computeMs } = loaderData;
   const whatIf = useWhatIf(input, loaderData.result);
   const result = whatIf.result;
+  const engineList = useMemo(() => engineEmittersOf(input, result?.edits ?? {}), [input, result]);
   const query = optionsToSearch(options).toString();
   const suffix = query ? `?${query}` : "";
   const base = `/sites/${site.id}`;
@@ -94,7 +96,7 @@ export default function ExposureSection({ loaderData }: Route.ComponentProps) {
           {levelsOf(result.areas).map((level, k, all) => {
             const map = (
               <Card key={level.elevationM} title={`${level.areas.map((a) => a.name).join(", ")} · level ${signed(level.elevationM)} m`}>
-                <ExposureLevelMap title={`Exposure map of ${site.name}, level ${signed(level.elevationM)} m`} elevationM={level.elevationM} areas={level.areas} result={result} options={options} obstructions={obstructions} accessPoints={accessPoints} width={k === 0 ? 960 : 560} />
+                <ExposureLevelMap title={`Exposure map of ${site.name}, level ${signed(level.elevationM)} m`} elevationM={level.elevationM} areas={level.areas} result={result} engineEmitters={engineList} options={options} obstructions={obstructions} accessPoints={accessPoints} width={k === 0 ? 960 : 560} />
               </Card>
             );
             if (k === 0) return map;
@@ -104,7 +106,7 @@ export default function ExposureSection({ loaderData }: Route.ComponentProps) {
               <div key="others" className="grid gap-6 lg:grid-cols-2">
                 {all.slice(1).map((l) => (
                   <Card key={l.elevationM} title={`${l.areas.map((a) => a.name).join(", ")} · level ${signed(l.elevationM)} m`}>
-                    <ExposureLevelMap title={`Exposure map of ${site.name}, level ${signed(l.elevationM)} m`} elevationM={l.elevationM} areas={l.areas} result={result} options={options} obstructions={obstructions} accessPoints={accessPoints} width={560} />
+                    <ExposureLevelMap title={`Exposure map of ${site.name}, level ${signed(l.elevationM)} m`} elevationM={l.elevationM} areas={l.areas} result={result} engineEmitters={engineList} options={options} obstructions={obstructions} accessPoints={accessPoints} width={560} />
                   </Card>
                 ))}
               </div>
@@ -128,7 +130,7 @@ export default function ExposureSection({ loaderData }: Route.ComponentProps) {
             <p className="mb-3 text-sm text-graphite-600">
               Switch emitters off, change their power, azimuth or downtilt: the map and the tables recompute in this browser. Nothing is saved; the inventory is edited under Emitters.
             </p>
-            <EmitterWhatIfTable result={result} stored={input.emitters} info={emitterInfo} options={options} edits={whatIf.edits} onEdit={whatIf.setEdit} />
+            <EmitterWhatIfTable result={result} stored={input.emitters} info={emitterInfo} patterns={input.patterns} options={options} edits={whatIf.edits} onEdit={whatIf.setEdit} />
           </Card>
           <Card title="Contributions at each surface's worst point (% of limit)">
             <ContributionsTable result={result} />
