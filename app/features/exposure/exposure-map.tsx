@@ -94,7 +94,7 @@ export function ExposureLevelMap({ title, engineEmitters, elevationM, areas, res
             {levelObstructions.map((o) => (
               <g key={o.id}>
                 <path d={pathOf(frame, [o.polygon])} fill="url(#plan-solid)" className="stroke-graphite-600" strokeWidth={1.25} />
-                <HaloText frame={frame} at={centroid(o.polygon)} text={`${o.name} · ${o.heightM} m`} small />
+                <HaloText frame={frame} at={[centroid(o.polygon)[0], Math.max(...o.polygon.map((p) => p[1])) - 14 / frame.scale]} text={`${o.name} · ${o.heightM} m`} small />
               </g>
             ))}
             {levelAccess.map((a) => (

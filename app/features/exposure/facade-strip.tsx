@@ -4,7 +4,7 @@ import { bandColour, bandThresholds, formatPercent } from "./colour-scale";
 import { classShapes, contourShapes, type Ring } from "./contours";
 import type { FacadeView } from "./exposure-result";
 
-const PAD = { left: 44, right: 12, top: 12, bottom: 30 };
+const PAD = { left: 44, right: 12, top: 24, bottom: 30 };
 
 export function FacadeStrip({ facade, width = 960 }: { facade: FacadeView; width?: number }) {
   const { along, heights } = facade;
