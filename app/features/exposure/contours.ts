@@ -17,6 +17,7 @@ export type GridGeometry = { nx: number; ny: number; x0: number; y0: number; ste
 export function extendOutside(values: ArrayLike<number>, inside: ArrayLike<boolean | number>, nx: number, ny: number, passes = 2): Float64Array {
   const out = Float64Array.from(values as ArrayLike<number>);
   let known = Uint8Array.from(inside as ArrayLike<number>, (v) => (v ? 1 : 0));
+  if (known.every((k) => k === 1)) return out;
   for (let pass = 0; pass < passes; pass++) {
     const next = known.slice();
     for (let j = 0; j < ny; j++) {
@@ -24,11 +25,10 @@ export function extendOutside(values: ArrayLike<number>, inside: ArrayLike<boole
         const c = j * nx + i;
         if (known[c]) continue;
         let best = -Infinity;
-        for (const [di, dj] of [[1, 0], [-1, 0], [0, 1], [0, -1]]) {
-          const a = i + di, b = j + dj;
-          if (a < 0 || b < 0 || a >= nx || b >= ny || !known[b * nx + a]) continue;
-          best = Math.max(best, out[b * nx + a]);
-        }
+        if (i + 1 < nx && known[c + 1]) best = Math.max(best, out[c + 1]);
+        if (i > 0 && known[c - 1]) best = Math.max(best, out[c - 1]);
+        if (j + 1 < ny && known[c + nx]) best = Math.max(best, out[c + nx]);
+        if (j > 0 && known[c - nx]) best = Math.max(best, out[c - nx]);
         if (best > -Infinity) {
           out[c] = best;
           next[c] = 1;

@@ -2,7 +2,7 @@
 // log axis), labelled contour lines, the four classes as outlines and hatching that read in
 // greyscale, obstructions and access points of the level, emitters with azimuth arrows, readings
 // against predictions, the worst point, and the value under the pointer.
-import { useId, useMemo, useState } from "react";
+import { memo, useId, useMemo, useState } from "react";
 import { pointInPolygon, type EmitterInput } from "~/engine";
 import { SitePlan } from "~/features/layout/site-plan";
 import type { PlanFrame, XY } from "~/features/layout/plan-frame";
@@ -29,6 +29,9 @@ type Props = {
   width?: number;
 };
 
+/** Stable empty lists: the plan's frame is memoised on its props' identity. */
+const NONE: never[] = [];
+
 /** Things standing on this level: within half a metre of its elevation. */
 const onLevel = (z: number, level: number) => Math.abs(z - level) <= 0.5;
 const pathOf = (frame: PlanFrame, rings: Ring[]) => rings.map((r) => r.map((p, i) => `${i ? "L" : "M"}${frame.toPx(p[0], p[1]).map((v) => v.toFixed(1)).join(" ")}`).join("") + "Z").join("");
@@ -37,6 +40,8 @@ export function ExposureLevelMap({ title, engineEmitters, elevationM, areas, res
   const uid = useId().replace(/[^a-zA-Z0-9_-]/g, "");
   const [hover, setHover] = useState<PointValue | null>(null);
   const geometry = useMemo(() => areas.map((a) => surfaceGeometry(a)), [areas]);
+  // Stable, so the plan's frame (and with it the memoised layers) survives pointer moves.
+  const planSurfaces = useMemo(() => areas.map((a) => ({ id: a.surfaceId, name: a.name, kind: "area" as const, polygon: a.polygon, elevationM: a.elevationM, access: "public" as const })), [areas]);
   const levelObstructions = obstructions.filter((o) => onLevel(o.baseM, elevationM));
   const levelAccess = accessPoints.filter((a) => onLevel(a.z, elevationM));
   const labels = new Map(result.emitters.map((e) => [e.engineId, e.label]));
@@ -53,7 +58,10 @@ export function ExposureLevelMap({ title, engineEmitters, elevationM, areas, res
     <figure className="space-y-2">
       <SitePlan
         title={title}
-        surfaces={areas.map((a) => ({ id: a.surfaceId, name: a.name, kind: "area", polygon: a.polygon, elevationM: a.elevationM, access: "public" }))}
+        surfaces={planSurfaces}
+        obstructions={NONE}
+        accessPoints={NONE}
+        extraPoints={NONE}
         onSiteMove={onMove}
         width={width}
       >
@@ -71,26 +79,11 @@ export function ExposureLevelMap({ title, engineEmitters, elevationM, areas, res
                 <path d="M0 0V7M0 0H7" stroke="#ffffff" strokeWidth="1.6" />
               </pattern>
             </defs>
-            <g clipPath={`url(#${uid}-clip)`}>
-              <rect x={0} y={0} width={frame.width} height={frame.height} className="fill-sheet" />
-              {geometry.map((g, k) =>
-                g.bands.map((b) => (b.rings.length ? <path key={`${k}-${b.value}`} d={pathOf(frame, b.rings)} fill={bandColour(b.value)} fillRule="evenodd" /> : null)),
-              )}
-              {geometry.map((g, k) => (
-                <g key={`c${k}`}>
-                  {g.classes[1].rings.length ? <path d={pathOf(frame, g.classes[1].rings)} fill={`url(#${uid}-h2)`} fillRule="evenodd" /> : null}
-                  {g.classes[2].rings.length ? <path d={pathOf(frame, g.classes[2].rings)} fill={`url(#${uid}-h3)`} fillRule="evenodd" /> : null}
-                  {g.classes.map((c) => (c.rings.length ? <ClassOutline key={c.value} d={pathOf(frame, c.rings)} cls={c.value} /> : null))}
-                  {g.lines.map((l) => (l.rings.length ? <ContourLine key={l.value} d={pathOf(frame, l.rings)} percent={l.value} /> : null))}
-                </g>
-              ))}
-            </g>
+            <FieldLayers frame={frame} geometry={geometry} uid={uid} />
             {areas.map((a) => (
               <path key={a.surfaceId} d={pathOf(frame, [a.polygon])} fill="none" className="stroke-ink-900" strokeWidth={1.5} />
             ))}
-            {contourLabels(frame, geometry, areas, result.emitters).map((l, i) => (
-              <HaloText key={i} frame={frame} at={l.at} text={`${l.percent} %`} bold={l.percent === 100} />
-            ))}
+            <ContourLabels frame={frame} geometry={geometry} areas={areas} emitters={result.emitters} />
             {levelObstructions.map((o) => (
               <g key={o.id}>
                 <path d={pathOf(frame, [o.polygon])} fill="url(#plan-solid)" className="stroke-graphite-600" strokeWidth={1.25} />
@@ -121,6 +114,36 @@ export function ExposureLevelMap({ title, engineEmitters, elevationM, areas, res
     </figure>
   );
 }
+
+type Geometry = ReturnType<typeof surfaceGeometry>;
+
+/** The colour bands, class hatching and outlines, and contour lines, clipped to the surfaces; redrawn only when the values change. */
+const FieldLayers = memo(function FieldLayers({ frame, geometry, uid }: { frame: PlanFrame; geometry: Geometry[]; uid: string }) {
+  return (
+    <g clipPath={`url(#${uid}-clip)`}>
+      <rect x={0} y={0} width={frame.width} height={frame.height} className="fill-sheet" />
+      {geometry.map((g, k) => g.bands.map((b) => (b.rings.length ? <path key={`${k}-${b.value}`} d={pathOf(frame, b.rings)} fill={bandColour(b.value)} fillRule="evenodd" /> : null)))}
+      {geometry.map((g, k) => (
+        <g key={`c${k}`}>
+          {g.classes[1].rings.length ? <path d={pathOf(frame, g.classes[1].rings)} fill={`url(#${uid}-h2)`} fillRule="evenodd" /> : null}
+          {g.classes[2].rings.length ? <path d={pathOf(frame, g.classes[2].rings)} fill={`url(#${uid}-h3)`} fillRule="evenodd" /> : null}
+          {g.classes.map((c) => (c.rings.length ? <ClassOutline key={c.value} d={pathOf(frame, c.rings)} cls={c.value} /> : null))}
+          {g.lines.map((l) => (l.rings.length ? <ContourLine key={l.value} d={pathOf(frame, l.rings)} percent={l.value} /> : null))}
+        </g>
+      ))}
+    </g>
+  );
+});
+
+const ContourLabels = memo(function ContourLabels({ frame, geometry, areas, emitters }: { frame: PlanFrame; geometry: Geometry[]; areas: AreaView[]; emitters: EmitterView[] }) {
+  return (
+    <>
+      {contourLabels(frame, geometry, areas, emitters).map((l, i) => (
+        <HaloText key={i} frame={frame} at={l.at} text={`${l.percent} %`} bold={l.percent === 100} />
+      ))}
+    </>
+  );
+});
 
 /** Bands, contour lines and class outlines of one surface, in site metres. */
 function surfaceGeometry(a: AreaView) {

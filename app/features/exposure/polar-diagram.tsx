@@ -7,8 +7,20 @@ import type { EnginePattern } from "~/infra/db/schema/emitters";
 const FLOOR_DB = 30;
 const R = 26;
 
-function cut(pattern: EnginePattern, plane: "h" | "v") {
+/** Cuts by pattern object: a library pattern is one object for the page's life, so redraws after a what-if edit reuse its cuts. */
+const cache = new WeakMap<object, { h: [number, number][]; v: [number, number][] }>();
+
+function cuts(pattern: EnginePattern) {
+  const key = typeof pattern === "object" ? pattern : null;
+  const hit = key ? cache.get(key) : undefined;
+  if (hit) return hit;
   const p = preparePattern(pattern);
+  const out = { h: cut(p, "h"), v: cut(p, "v") };
+  if (key) cache.set(key, out);
+  return out;
+}
+
+function cut(p: ReturnType<typeof preparePattern>, plane: "h" | "v") {
   const pts: [number, number][] = [];
   for (let d = -180; d <= 180; d += 3) {
     const a = (d * Math.PI) / 180;
@@ -19,8 +31,7 @@ function cut(pattern: EnginePattern, plane: "h" | "v") {
 }
 
 export function PolarDiagrams({ pattern, azimuthDeg, tiltDeg, label }: { pattern: EnginePattern; azimuthDeg: number; tiltDeg: number; label: string }) {
-  const h = cut(pattern, "h");
-  const v = cut(pattern, "v");
+  const { h, v } = cuts(pattern);
   // Horizontal: bearing = azimuth + φ, clockwise from north (up).
   const hPath = h.map(([a, r], i) => {
     const b = a + (azimuthDeg * Math.PI) / 180;
