@@ -12,7 +12,9 @@ const num = `${td} figures text-right whitespace-nowrap`;
 
 export function Table({ caption, head, children, testId }: { caption: string; head: React.ReactNode; children: React.ReactNode; testId?: string }) {
   return (
-    <div className="overflow-x-auto rounded-sheet border border-rule bg-sheet" data-testid={testId}>
+    // Focusable and named, so a keyboard can scroll it when it is wider than the screen; relative, so the
+    // screen-reader-only text inside stays within the scrolled box.
+    <div className="relative overflow-x-auto rounded-sheet border border-rule bg-sheet" data-testid={testId} tabIndex={0} role="region" aria-label={caption}>
       <table className="min-w-full text-sm tabular-nums">
         <caption className="sr-only">{caption}</caption>
         <thead className="border-b border-ink-900">{head}</thead>
