@@ -41,6 +41,7 @@ export function ExposureLevelMap({ title, engineEmitters, elevationM, areas, res
   const [hover, setHover] = useState<PointValue | null>(null);
   const geometry = useMemo(() => areas.map((a) => surfaceGeometry(a)), [areas]);
   // Stable, so the plan's frame (and with it the memoised layers) survives pointer moves.
+  const avoid = useMemo<XY[]>(() => [...result.readings.map((r) => [r.x, r.y] as XY), ...accessPoints.map((a) => [a.x, a.y] as XY), ...obstructions.map((o) => centroid(o.polygon))], [result.readings, accessPoints, obstructions]);
   const planSurfaces = useMemo(() => areas.map((a) => ({ id: a.surfaceId, name: a.name, kind: "area" as const, polygon: a.polygon, elevationM: a.elevationM, access: "public" as const })), [areas]);
   const levelObstructions = obstructions.filter((o) => onLevel(o.baseM, elevationM));
   const levelAccess = accessPoints.filter((a) => onLevel(a.z, elevationM));
@@ -83,7 +84,7 @@ export function ExposureLevelMap({ title, engineEmitters, elevationM, areas, res
             {areas.map((a) => (
               <path key={a.surfaceId} d={pathOf(frame, [a.polygon])} fill="none" className="stroke-ink-900" strokeWidth={1.5} />
             ))}
-            <ContourLabels frame={frame} geometry={geometry} areas={areas} emitters={result.emitters} />
+            <ContourLabels frame={frame} geometry={geometry} areas={areas} emitters={result.emitters} avoid={avoid} />
             {levelObstructions.map((o) => (
               <g key={o.id}>
                 <path d={pathOf(frame, [o.polygon])} fill="url(#plan-solid)" className="stroke-graphite-600" strokeWidth={1.25} />
@@ -135,10 +136,10 @@ const FieldLayers = memo(function FieldLayers({ frame, geometry, uid }: { frame:
   );
 });
 
-const ContourLabels = memo(function ContourLabels({ frame, geometry, areas, emitters }: { frame: PlanFrame; geometry: Geometry[]; areas: AreaView[]; emitters: EmitterView[] }) {
+const ContourLabels = memo(function ContourLabels({ frame, geometry, areas, emitters, avoid }: { frame: PlanFrame; geometry: Geometry[]; areas: AreaView[]; emitters: EmitterView[]; avoid: XY[] }) {
   return (
     <>
-      {contourLabels(frame, geometry, areas, emitters).map((l, i) => (
+      {contourLabels(frame, geometry, areas, emitters, avoid).map((l, i) => (
         <HaloText key={i} frame={frame} at={l.at} text={`${l.percent} %`} bold={l.percent === 100} />
       ))}
     </>
@@ -186,8 +187,9 @@ function emitterLabelPlaces(frame: PlanFrame, emitters: EmitterView[]) {
 }
 
 /** One label per contour ring long enough to carry one: at a place well inside the surface and at least 40 px from emitters and other labels. */
-function contourLabels(frame: PlanFrame, geometry: ReturnType<typeof surfaceGeometry>[], areas: AreaView[], emitters: EmitterView[]) {
-  const taken: XY[] = emitters.map((e) => frame.toPx(e.x, e.y));
+function contourLabels(frame: PlanFrame, geometry: ReturnType<typeof surfaceGeometry>[], areas: AreaView[], emitters: EmitterView[], avoid: XY[]) {
+  // Clear of emitters, readings, access points and their labels (which run to the right of them).
+  const taken: XY[] = [...emitters.map((e) => frame.toPx(e.x, e.y)), ...avoid.flatMap(([x, y]) => [frame.toPx(x, y), frame.toPx(x + 40 / frame.scale, y)])];
   const out: { at: XY; percent: number }[] = [];
   const margin = 12 / frame.scale;
   const inside = (x: number, y: number) => areas.some((a) => [[-margin, -margin], [margin, -margin], [margin, margin], [-margin, margin]].every(([dx, dy]) => pointInPolygon(x + dx, y + dy, a.polygon)));
