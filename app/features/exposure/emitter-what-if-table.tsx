@@ -109,7 +109,6 @@ function NumberBox({ id, label, value, disabled, onValue, children }: { id: stri
   useEffect(() => {
     if (Number(text) !== value) setText(String(value));
     // Only when the value changes from outside (reset, unit switch).
-    // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [value]);
   const valid = text.trim() !== "" && Number.isFinite(Number(text));
   return (
