@@ -29,6 +29,7 @@ export default [
         route("layout", "routes/sites/layout-edit.tsx"),
         route("emitters", "routes/sites/emitters.tsx"),
         route("history", "routes/sites/history.tsx"),
+        route("exposure", "routes/exposure/exposure.tsx"),
         route("visits", "routes/sites/visits.tsx"),
         route("visits/new", "routes/sites/visit-new.tsx"),
         route("visits/:visitId", "routes/sites/visit.tsx"),

@@ -15,6 +15,8 @@ export function contentSecurityPolicy(nonce: string, { dev = false } = {}) {
     "img-src": ["'self'", "data:", "blob:"],
     "font-src": ["'self'"],
     "connect-src": ["'self'"],
+    // The Exposure page's what-if Web Worker: a module worker from this origin (blob: for Vite's dev server).
+    "worker-src": ["'self'", "blob:"],
     "frame-ancestors": ["'none'"],
     "base-uri": ["'none'"],
     "form-action": ["'self'"],

@@ -94,6 +94,7 @@ const cases: Case[] = [
   { file: "routes/sites/edit.tsx", method: "loader", path: () => `/sites/${siteId}/edit`, params: () => ({ siteId }), expect: rolesIn(inventoryEditors, "ok") },
   { file: "routes/sites/edit.tsx", method: "action", path: () => `/sites/${siteId}/edit`, form: {}, params: () => ({ siteId }), expect: rolesIn(inventoryEditors, "bad-request") },
   { file: "routes/sites/history.tsx", method: "loader", path: () => `/sites/${siteId}/history`, params: () => ({ siteId }), expect: rolesIn(staffRoles, "ok") },
+  { file: "routes/exposure/exposure.tsx", method: "loader", path: () => `/sites/${siteId}/exposure`, params: () => ({ siteId }), expect: rolesIn(staffRoles, "ok") },
   { file: "routes/api/v1/sites.ts", method: "loader", path: () => "/api/v1/sites", expect: apiRoles(staffRoles, "ok") },
   { file: "routes/api/v1/sites.ts", method: "action", path: () => "/api/v1/sites", json: {}, expect: apiRoles(inventoryEditors, "bad-request") },
   { file: "routes/api/v1/site.ts", method: "loader", path: () => `/api/v1/sites/${siteId}`, params: () => ({ siteId }), expect: apiRoles(staffRoles, "ok") },

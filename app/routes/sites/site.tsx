@@ -22,6 +22,7 @@ const sections: { to: string; label: string; end?: boolean; also?: string }[] = 
   { to: "", label: "Layout", end: true, also: "layout" },
   { to: "emitters", label: "Emitters" },
   { to: "visits", label: "Visits" },
+  { to: "exposure", label: "Exposure" },
   { to: "assessments", label: "Assessments" },
   { to: "history", label: "History" },
 ];

@@ -1,0 +1,82 @@
+// The page's what-if state: the edits, the result drawn (the loader's while there are no edits,
+// else the worker's), and the timings (edit → result; the bench script reads them).
+import { useCallback, useEffect, useRef, useState } from "react";
+import type { ExposureInput, ExposureResult } from "./exposure-result";
+import { cleanEdits, hasEdits, type EmitterEdit, type WhatIfEdits } from "./what-if";
+import type { WorkerAnswer, WorkerRequest } from "./what-if.worker";
+
+export type WhatIfTiming = { seq: number; computeMs: number; resultMs: number };
+declare global {
+  interface Window {
+    __exposureTimings?: (WhatIfTiming & { paintedMs?: number })[];
+  }
+}
+
+export function useWhatIf(input: ExposureInput, base: ExposureResult | null) {
+  const [edits, setEdits] = useState<WhatIfEdits>({});
+  const [result, setResult] = useState<ExposureResult | null>(null);
+  const [state, setState] = useState<"starting" | "ready" | "computing" | "failed">("starting");
+  const [error, setError] = useState<string | null>(null);
+  const [timing, setTiming] = useState<WhatIfTiming | null>(null);
+  const worker = useRef<Worker | null>(null);
+  const seq = useRef(0);
+  const sentAt = useRef(new Map<number, number>());
+
+  useEffect(() => {
+    if (!base) return;
+    const w = new Worker(new URL("./what-if.worker.ts", import.meta.url), { type: "module" });
+    worker.current = w;
+    w.onmessage = (event: MessageEvent<WorkerAnswer>) => {
+      const answer = event.data;
+      if (answer.type === "ready") return setState("ready");
+      if (answer.seq !== seq.current) return; // an older edit's answer
+      if (answer.type === "error") {
+        setError(answer.message);
+        setState("failed");
+        return;
+      }
+      const t = { seq: answer.seq, computeMs: answer.computeMs, resultMs: performance.now() - (sentAt.current.get(answer.seq) ?? performance.now()) };
+      setResult(answer.result);
+      setTiming(t);
+      setError(null);
+      setState("ready");
+      const list = (window.__exposureTimings ??= []);
+      list.push(t);
+      // Painted: the frame after React has committed the new map.
+      requestAnimationFrame(() => setTimeout(() => Object.assign(t, { paintedMs: performance.now() - (sentAt.current.get(answer.seq) ?? 0) }), 0));
+    };
+    w.onerror = () => {
+      setError("The what-if calculator could not start in this browser.");
+      setState("failed");
+    };
+    w.postMessage({ type: "init", input, base } satisfies WorkerRequest);
+    return () => w.terminate();
+  }, [input, base]);
+
+  const send = useCallback((next: WhatIfEdits) => {
+    setEdits(next);
+    const id = ++seq.current;
+    if (!hasEdits(cleanEdits(input.emitters, next))) {
+      setResult(null);
+      setTiming(null);
+      return;
+    }
+    sentAt.current.set(id, performance.now());
+    setState("computing");
+    worker.current?.postMessage({ type: "compute", seq: id, edits: next } satisfies WorkerRequest);
+  }, [input]);
+
+  const setEdit = useCallback(
+    (id: string, edit: EmitterEdit | null) => {
+      const next = { ...edits };
+      if (edit && Object.values(edit).some((v) => v !== undefined && v !== false)) next[id] = edit;
+      else delete next[id];
+      send(next);
+    },
+    [edits, send],
+  );
+
+  const reset = useCallback(() => send({}), [send]);
+  const active = hasEdits(cleanEdits(input.emitters, edits));
+  return { edits, setEdit, reset, active, result: active && result ? result : base, pending: active && (!result || state === "computing"), state, error, timing };
+}

@@ -1,0 +1,83 @@
+// Figures for the Exposure page on the demo rooftop (Calloway House) at 0.25 m over 0–2 m (11
+// heights): the loader's server time, and the what-if recompute and redraw time in Chromium.
+// Prints figures, asserts nothing. Needs the built app and the seeded stack:
+//   BUILD_DIR=build-test npm run -s build && WITH_APP=1 npm run -s with-stack -- node scripts/bench-exposure.mjs [runs]
+import { chromium } from "playwright-core";
+
+const base = process.env.APP_URL ?? "http://127.0.0.1:3100";
+const runs = Number(process.argv[2] ?? 8);
+const stats = (xs) => {
+  const s = [...xs].sort((a, b) => a - b);
+  const q = (p) => s[Math.min(s.length - 1, Math.floor(p * s.length))];
+  return `n=${s.length} min ${s[0].toFixed(0)} median ${q(0.5).toFixed(0)} p90 ${q(0.9).toFixed(0)} max ${s[s.length - 1].toFixed(0)} ms`;
+};
+
+const browser = await chromium.launch({ executablePath: process.env.CHROMIUM ?? "/usr/bin/chromium", args: ["--no-sandbox", "--disable-gpu"] });
+const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+await page.goto(`${base}/sign-in`);
+await page.locator("html[data-hydrated]").waitFor({ state: "attached" });
+await page.getByLabel("E-mail").fill("engineer@demo.isotrope.test");
+await page.getByLabel("Password").fill(process.env.DEMO_PASSWORD ?? "isotrope-demo");
+await page.getByRole("button", { name: "Sign in" }).click();
+await page.getByRole("button", { name: "Sign out" }).waitFor();
+await page.goto(`${base}/sites`);
+const href = await page.getByRole("link", { name: "Calloway House" }).first().getAttribute("href");
+const url = `${base}${href}/exposure`;
+
+// 1. The loader: the computation's own time (measured in the loader) and the document's time to first byte.
+const compute = [];
+const ttfb = [];
+const hydrated = [];
+for (let i = 0; i < Math.max(3, Math.ceil(runs / 2)); i++) {
+  const t0 = Date.now();
+  await page.goto(url);
+  await page.locator("html[data-hydrated]").waitFor({ state: "attached" });
+  hydrated.push(Date.now() - t0);
+  const nav = await page.evaluate(() => performance.getEntriesByType("navigation")[0].toJSON());
+  ttfb.push(nav.responseStart - nav.requestStart);
+  const text = await page.getByTestId("what-if-state").innerText();
+  compute.push(Number(/server in ([\d.]+)/.exec(text.replace(/\s+/g, " "))?.[1] ?? NaN));
+}
+const size = await page.evaluate(() => document.documentElement.outerHTML.length);
+console.log(`loader computation (computeExposure, in-process): ${stats(compute)}`);
+console.log(`document time to first byte:                  ${stats(ttfb)}`);
+console.log(`navigation to hydrated page:                  ${stats(hydrated)}`);
+console.log(`HTML size: ${(size / 1024).toFixed(0)} KiB`);
+
+// 2. What-if: wait for the worker to have every emitter's layers, then edit and time each answer.
+await page.waitForFunction(() => !document.querySelector("[data-testid=what-if-state]")?.textContent?.includes("Preparing"), null, { timeout: 120_000 });
+await page.evaluate(() => (window.__exposureTimings = []));
+const toggle = page.getByLabel("NW-A19 on");
+for (let i = 0; i < runs; i++) {
+  if (i % 2 === 0) {
+    await toggle.uncheck();
+    await page.locator("section[data-what-if=on][data-what-if-pending=false]").waitFor();
+  } else {
+    await toggle.check();
+    await page.locator("section[data-what-if=off]").waitFor();
+    // Back to the stored inventory draws the loader's result: no worker round trip to time.
+  }
+  await page.waitForTimeout(150);
+}
+const power = page.locator("[data-emitter-row='SM-3-2100'] input[id$='-power']");
+for (let i = 0; i < runs; i++) {
+  await power.fill(String(-(i % 6) - 1));
+  await page.locator("section[data-what-if=on][data-what-if-pending=false]").waitFor();
+  await page.waitForTimeout(150);
+}
+await page.evaluate(() => (window.__lastSwitch = window.__exposureTimings.length));
+const tilt = page.locator("[data-emitter-row='SM-3-2100'] input[id$='-tilt']");
+for (let i = 0; i < Math.ceil(runs / 2); i++) {
+  await tilt.fill(String(5 + i));
+  await page.locator("section[data-what-if=on][data-what-if-pending=false]").waitFor();
+  await page.waitForTimeout(150);
+}
+const timings = await page.evaluate(() => ({ all: window.__exposureTimings, split: window.__lastSwitch }));
+const weightOnly = timings.all.slice(0, timings.split);
+const geometry = timings.all.slice(timings.split);
+console.log(`what-if, off / power edits (re-weighted layers): worker compute ${stats(weightOnly.map((t) => t.computeMs))}`);
+console.log(`                                      edit → result in the page ${stats(weightOnly.map((t) => t.resultMs))}`);
+console.log(`                                      edit → next frame painted ${stats(weightOnly.filter((t) => t.paintedMs).map((t) => t.paintedMs))}`);
+console.log(`what-if, tilt edits (one emitter re-evaluated):  worker compute ${stats(geometry.map((t) => t.computeMs))}`);
+console.log(`                                      edit → next frame painted ${stats(geometry.filter((t) => t.paintedMs).map((t) => t.paintedMs))}`);
+await browser.close();
