@@ -2,9 +2,9 @@
 // Edition 97-01, eq. (3)) and the FCC limits above 1500 MHz, 10 W/m² general population and
 // 50 W/m² occupational (47 CFR §1.1310(e)(1), Table 1).
 import { describe, expect, it } from "vitest";
-import type { EmitterInput } from "~/engine";
-import { boundaryLines, sectionField, sectionMaximum } from "./section-field";
-import { sectionGrid } from "./section-geometry";
+import { percentAt, type EmitterInput } from "~/engine";
+import { boundaryLines, emittersInCutFrame, preparedFor, sectionField, sectionMaximum } from "./section-field";
+import { samplePoint, sectionGrid } from "./section-geometry";
 
 // Isotropic, EIRP 1000π W: 10 W/m² (100 % general) at R = 5 m, 50 W/m² (100 % occupational) at √5 m.
 const iso: EmitterInput = { id: "ISO", frequencyMHz: 1900, powerW: 1000 * Math.PI, gainDbi: 0, position: { x: 10, y: 0, z: 0 } } as EmitterInput;
@@ -38,5 +38,32 @@ describe("section field", () => {
     const m = sectionMaximum(field.general, g);
     expect(m.s).toBeCloseTo(10, 9);
     expect(m.z).toBeCloseTo(0, 9);
+  });
+});
+
+describe("the cut's frame", () => {
+  // A directional, tilted, near-field emitter: the rotation must keep every angle off boresight.
+  const panel = { id: "P", frequencyMHz: 2130, powerW: 160, lossDb: 1, gainDbi: 17.5, position: { x: 3, y: -2, z: 2.5 }, azimuthDeg: 70, tiltDeg: 4, model: "auto", apertureM: 1.4,
+    pattern: { type: "3gpp-38.901", hBeamwidthDeg: 65, vBeamwidthDeg: 7 } } as EmitterInput;
+  const dish = { id: "D", frequencyMHz: 1900, powerW: 20, gainDbi: 14, position: { x: -4, y: 6, z: 1 }, azimuthDeg: 300, tiltDeg: -5,
+    pattern: { type: "itu-r-f.1336-sectoral", hBeamwidthDeg: 90, vBeamwidthDeg: 10 } } as EmitterInput;
+
+  it("gives at each sample the value the engine gives at the same point in site coordinates (rotation about the vertical, common practice)", () => {
+    const g = sectionGrid({ a: [-6, -9], b: [14, 12] }, -2, 8, { minStep: 0.5 });
+    const field = sectionField([panel, dish], "fcc", g);
+    const direct = preparedFor([panel, dish], "fcc").general;
+    for (const [i, k] of [[0, 0], [10, 5], [25, 9], [g.ns - 1, g.nz - 1], [40, 12]]) {
+      const [x, y, z] = samplePoint(g, i, k);
+      const want = direct.reduce((sum, pe) => sum + percentAt(pe, x, y, z), 0);
+      expect(field.general[k * g.ns + i] / want).toBeCloseTo(1, 6);
+    }
+  });
+
+  it("puts an emitter on the cut at y = 0 and its boresight along the cut at 90°", () => {
+    const g = sectionGrid({ a: [0, 0], b: [10, 10] }, 0, 5);
+    const [e] = emittersInCutFrame([{ ...panel, position: { x: 5, y: 5, z: 2 }, azimuthDeg: 45 }], g);
+    expect(e.position.x).toBeCloseTo(Math.hypot(5, 5), 9);
+    expect(e.position.y).toBeCloseTo(0, 9);
+    expect(e.azimuthDeg).toBeCloseTo(90, 9);
   });
 });

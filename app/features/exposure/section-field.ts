@@ -1,33 +1,67 @@
 // The elevation view's numbers: total % of each tier's limit at every sample of the cut, from the
 // engine (validated request, each emitter's constants hoisted once, then percentAt per point:
 // the same function the grids use), and the 100 % boundary of each tier as contour lines.
-import { gridContours, parseRequest, percentAt, prepareRequest, type EmitterInput, type GridAxes, type StandardId, type Tier } from "~/engine";
-import { samplePoint, type SectionGrid } from "./section-geometry";
+import { accumulateRow, gridContours, parseRequest, prepareRequest, rowScratch, type EmitterInput, type GridAxes, type StandardId, type Tier } from "~/engine";
+import type { SectionGrid } from "./section-geometry";
 
 export type SectionField = { general: Float64Array; occupational: Float64Array };
 
-/** Validates the emitters with the engine's own schema (same defaults), throwing the engine's message on bad input. */
+/**
+ * Validates the emitters with the engine's own schema (same defaults), throwing the engine's
+ * message on bad input, and hoists their constants against the general-population limits, with
+ * each emitter's factor to the occupational ones. % of a limit is 100·S/S_lim and S does not
+ * depend on the tier, so % occupational = % general × S_lim,general / S_lim,occupational: one
+ * evaluation per point serves both tiers.
+ */
 export function preparedFor(emitters: EmitterInput[], standard: StandardId) {
   const parsed = parseRequest({ standard, tier: "general", emitters, points: [{ x: 0, y: 0, z: 0 }] });
   if (!parsed.ok) throw new Error(parsed.message);
-  return { general: prepareRequest(parsed.request, "general").prepared, occupational: prepareRequest(parsed.request, "occupational").prepared };
+  const general = prepareRequest(parsed.request, "general");
+  const occupational = prepareRequest(parsed.request, "occupational");
+  return {
+    general: general.prepared,
+    occupational: occupational.prepared,
+    toOccupational: general.summaries.map((s, e) => s.limitWm2 / occupational.summaries[e].limitWm2),
+  };
+}
+
+/**
+ * The emitters seen from the cut: a rotation about the vertical through the cut's start A that
+ * turns the cut onto the +x axis, so each sample (s, z) is the point (s, 0, z). A rotation keeps
+ * every distance and every angle off boresight, so the values are the same; it lets the engine's
+ * row kernel (all heights of a row at once) do the work. Positions: x′ = Δ·u, y′ = Δ·u⊥
+ * (u the cut's unit vector); bearings: az′ = az + 90° − β, β the cut's bearing.
+ */
+export function emittersInCutFrame(emitters: readonly EmitterInput[], g: Pick<SectionGrid, "a" | "ux" | "uy">): EmitterInput[] {
+  const beta = (Math.atan2(g.ux, g.uy) * 180) / Math.PI;
+  return emitters.map((e) => {
+    const dx = e.position.x - g.a[0];
+    const dy = e.position.y - g.a[1];
+    const az = ((((e.azimuthDeg ?? 0) + 90 - beta) % 360) + 360) % 360;
+    return { ...e, position: { x: dx * g.ux + dy * g.uy, y: -dx * g.uy + dy * g.ux, z: e.position.z }, azimuthDeg: az };
+  });
 }
 
 /** Σ over emitters of % of each one's limit at each sample, row k (height) by column i (distance): index k·ns + i. */
 export function sectionField(emitters: EmitterInput[], standard: StandardId, g: SectionGrid): SectionField {
-  const prepared = preparedFor(emitters, standard);
+  const prepared = preparedFor(emittersInCutFrame(emitters, g), standard);
+  const xs = Float64Array.from({ length: g.ns }, (_, i) => i * g.step);
+  const zs = Float64Array.from({ length: g.nz }, (_, k) => g.z0 + k * g.step);
+  const acc = new Float64Array(g.ns * g.nz);
+  const scratch = rowScratch(g.nz);
   const out: SectionField = { general: new Float64Array(g.ns * g.nz), occupational: new Float64Array(g.ns * g.nz) };
-  for (const tier of ["general", "occupational"] as const) {
-    const values = out[tier];
-    for (const pe of prepared[tier]) {
+  prepared.general.forEach((pe, e) => {
+    acc.fill(0);
+    accumulateRow(pe, xs, 0, zs, acc, scratch, null, 0);
+    const w = prepared.toOccupational[e];
+    for (let i = 0; i < g.ns; i++) {
       for (let k = 0; k < g.nz; k++) {
-        for (let i = 0; i < g.ns; i++) {
-          const [x, y, z] = samplePoint(g, i, k);
-          values[k * g.ns + i] += percentAt(pe, x, y, z);
-        }
+        const v = acc[i * g.nz + k];
+        out.general[k * g.ns + i] += v;
+        out.occupational[k * g.ns + i] += v * w;
       }
     }
-  }
+  });
   return out;
 }
 

@@ -22,13 +22,16 @@ export function ColourLegend({ width = 320, caption, keys }: { width?: number; c
       <rect x={12} y={18} width={ramp} height={12} fill={`url(#ramp-${id})`} className="stroke-ink-900" strokeWidth={0.5} />
       {COLOUR_TICKS.map((t) => {
         const x = 12 + colourPosition(t) * ramp;
+        const major = Math.log10(t) % 1 === 0;
         return (
           <g key={t}>
-            <line x1={x} x2={x} y1={30} y2={34} className="stroke-ink-900" />
-            <text x={x} y={45} textAnchor={t === 1 ? "start" : t === 1000 ? "end" : "middle"} className="fill-ink-700 text-[10px] tabular-nums">
-              {percentLabel(t)}
-              {t === 1000 ? "+" : ""}
-            </text>
+            <line x1={x} x2={x} y1={30} y2={major ? 35 : 33} className="stroke-ink-900" />
+            {major ? (
+              <text x={x} y={46} textAnchor={t === 1 ? "start" : t === 1000 ? "end" : "middle"} className="fill-ink-700 text-[10px] tabular-nums">
+                {t === 1 ? "≤ " : t === 1000 ? "≥ " : ""}
+                {percentLabel(t)}
+              </text>
+            ) : null}
           </g>
         );
       })}

@@ -30,7 +30,7 @@ export function solidBox(emitters: readonly EmitterInput[], reachM: number, floo
 }
 
 /** A grid over the box with one step both ways, the finest of `minStep` that keeps at most `maxNodes` nodes. */
-export function solidGrid(box: Box, { minStep = 0.25, maxNodes = 400_000 } = {}): SolidGrid {
+export function solidGrid(box: Box, { minStep = 0.25, maxNodes = 250_000 } = {}): SolidGrid {
   const volume = (box.maxX - box.minX) * (box.maxY - box.minY) * (box.maxZ - box.minZ);
   let step = Math.max(minStep, Math.cbrt(volume / maxNodes));
   step = Math.ceil(step * 20) / 20; // a round step: multiples of 5 cm
@@ -46,15 +46,22 @@ export function solidField(emitters: EmitterInput[], standard: StandardId, g: So
   const acc = new Float64Array(g.nx * g.nz);
   const scratch = rowScratch(g.nz);
   const out = { grid: g, general: new Float32Array(g.nx * g.ny * g.nz), occupational: new Float32Array(g.nx * g.ny * g.nz) };
-  for (const tier of ["general", "occupational"] as const) {
-    const values = out[tier];
-    for (let j = 0; j < g.ny; j++) {
+  for (let j = 0; j < g.ny; j++) {
+    const y = g.y0 + j * g.step;
+    prepared.general.forEach((pe, e) => {
       acc.fill(0);
-      const y = g.y0 + j * g.step;
-      for (const pe of prepared[tier]) accumulateRow(pe, xs, y, zs, acc, scratch, null, 0);
-      // accumulateRow fills acc[i·nz + k]; reorder to x fastest.
-      for (let k = 0; k < g.nz; k++) for (let i = 0; i < g.nx; i++) values[i + g.nx * (j + g.ny * k)] = acc[i * g.nz + k];
-    }
+      accumulateRow(pe, xs, y, zs, acc, scratch, null, 0);
+      const w = prepared.toOccupational[e];
+      // accumulateRow fills acc[i·nz + k]; the extractor wants x fastest.
+      for (let k = 0; k < g.nz; k++) {
+        for (let i = 0; i < g.nx; i++) {
+          const v = acc[i * g.nz + k];
+          const at = i + g.nx * (j + g.ny * k);
+          out.general[at] += v;
+          out.occupational[at] += v * w;
+        }
+      }
+    });
   }
   return out;
 }

@@ -45,7 +45,7 @@ function boundary(positions: Float32Array, colour: string, opacity: number) {
 /** Mounts the scene in `host`; returns its controls: redraw with other layers shown, and dispose. */
 export function mountSolidScene(host: HTMLElement, input: SceneInput, onFirstFrame: () => void) {
   const width = host.clientWidth || 960;
-  const height = Math.round(width * 0.6);
+  const height = host.clientHeight || Math.round(width * 0.6);
   const renderer = new THREE.WebGLRenderer({ antialias: true, preserveDrawingBuffer: true });
   renderer.setPixelRatio(Math.min(2, window.devicePixelRatio || 1));
   renderer.setSize(width, height);
@@ -88,7 +88,7 @@ export function mountSolidScene(host: HTMLElement, input: SceneInput, onFirstFra
   const size = box.getSize(new THREE.Vector3()).length();
   const camera = new THREE.PerspectiveCamera(40, width / height, 0.1, size * 10);
   camera.up.set(0, 0, 1);
-  camera.position.set(centre.x - size * 0.45, centre.y - size * 0.75, centre.z + size * 0.5);
+  camera.position.set(centre.x - size * 0.32, centre.y - size * 0.55, centre.z + size * 0.38);
   const controls = new OrbitControls(camera, renderer.domElement);
   controls.target.copy(centre);
   controls.update();

@@ -3,6 +3,7 @@
 import { useEffect, useRef, useState } from "react";
 import type { EmitterInput } from "~/engine";
 import type { PlanSurface } from "~/features/layout/site-plan";
+import { percentLabel } from "./colour-scale";
 import { tierLabels, type ExposureOptions } from "./options";
 import type { ObstructionLike } from "./section-geometry";
 import type { SolidMeshes } from "./solid-mesh";
@@ -61,15 +62,17 @@ export function SolidView({ emitters, surfaces, obstructions, options }: Props) 
   return (
     <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_18rem]">
       <div className="min-w-0 space-y-2">
-        <div ref={host} className="aspect-[5/3] w-full overflow-hidden rounded-sheet border border-rule bg-sheet">
-          {state.kind === "working" ? <p className="p-5 text-sm text-graphite-600">Computing the boundaries in your browser…</p> : null}
+        <div className="relative aspect-[5/3] w-full overflow-hidden rounded-sheet border border-rule bg-sheet">
+          {/* three.js owns this element's children; React renders none into it. */}
+          <div ref={host} className="absolute inset-0" />
+          {state.kind === "working" ? <p className="absolute inset-0 p-5 text-sm text-graphite-600">Computing the boundaries in your browser…</p> : null}
         </div>
         {state.kind === "failed" ? <p className="text-sm text-danger-700">The 3D view could not be drawn: {state.message}</p> : null}
         {state.kind === "ready" ? (
           <p className="text-sm text-graphite-600" data-testid="solid-summary">
             Drag to rotate, scroll to zoom, right-drag to pan. Grid of {state.meshes.grid.nx} × {state.meshes.grid.ny} × {state.meshes.grid.nz} points, <span className="figures">{state.meshes.grid.step} m</span> apart; first frame after{" "}
             <span className="figures">{state.firstFrameMs.toFixed(0)} ms</span> (computing <span className="figures">{state.meshes.computeMs.toFixed(0)} ms</span>). Highest value in the box:{" "}
-            <span className="figures">{Math.round(state.meshes.maxPercent[options.tier]).toLocaleString("en-GB")} %</span> of the {label(options.tier)} limit.
+            <span className="figures">{percentLabel(state.meshes.maxPercent[options.tier])}</span> of the {label(options.tier)} limit.
           </p>
         ) : null}
       </div>
