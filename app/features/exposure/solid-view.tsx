@@ -3,7 +3,6 @@
 import { useEffect, useRef, useState } from "react";
 import type { EmitterInput } from "~/engine";
 import type { PlanSurface } from "~/features/layout/site-plan";
-import { percentLabel } from "./colour-scale";
 import { tierLabels, type ExposureOptions } from "./options";
 import type { ObstructionLike } from "./section-geometry";
 import type { SolidMeshes } from "./solid-mesh";
@@ -71,8 +70,7 @@ export function SolidView({ emitters, surfaces, obstructions, options }: Props) 
         {state.kind === "ready" ? (
           <p className="text-sm text-graphite-600" data-testid="solid-summary">
             Drag to rotate, scroll to zoom, right-drag to pan. Grid of {state.meshes.grid.nx} × {state.meshes.grid.ny} × {state.meshes.grid.nz} points, <span className="figures">{state.meshes.grid.step} m</span> apart; first frame after{" "}
-            <span className="figures">{state.firstFrameMs.toFixed(0)} ms</span> (computing <span className="figures">{state.meshes.computeMs.toFixed(0)} ms</span>). Highest value in the box:{" "}
-            <span className="figures">{percentLabel(state.meshes.maxPercent[options.tier])}</span> of the {label(options.tier)} limit.
+            <span className="figures">{state.firstFrameMs.toFixed(0)} ms</span> (computing <span className="figures">{state.meshes.computeMs.toFixed(0)} ms</span>).
           </p>
         ) : null}
       </div>
