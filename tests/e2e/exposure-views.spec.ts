@@ -1,6 +1,7 @@
 // The engineer opens the demo rooftop's elevation view (the 100 % boundaries are labelled), its 3D
 // view (a WebGL canvas with a real picture in it), and the work-area planner, where they draw an
 // area in front of a low sector and read which emitters to turn down and the map after.
+import AxeBuilder from "@axe-core/playwright";
 import { expect, test, type Page } from "@playwright/test";
 import sharp from "sharp";
 import config from "./playwright.config";
@@ -105,4 +106,18 @@ test("planner: a work area in front of the west sector, the plan and the map aft
   await expect(table.getByRole("row", { name: /SM-3-2100/ })).toContainText(/reduce power|switch off/);
   await expect(page.getByRole("img", { name: "Map of Main roof after the changes" })).toBeVisible();
   await shot(page, info, "planner-general");
+});
+
+test("on a phone the three pages fit the width and pass axe", async ({ page }, info) => {
+  await page.setViewportSize({ width: 390, height: 844 });
+  const site = await demoSite(page);
+  for (const [view, ready] of [["section", "section-summary"], ["solid", "solid-summary"], ["planner", null]] as const) {
+    await visit(page, `${site}/exposure/${view}`);
+    if (ready) await expect(page.getByTestId(ready)).toBeVisible({ timeout: 90_000 });
+    const overflow = await page.evaluate(() => document.scrollingElement!.scrollWidth - window.innerWidth);
+    expect.soft(overflow, `${view}: wider than the window`).toBeLessThanOrEqual(0);
+    const axe = await new AxeBuilder({ page }).analyze();
+    expect.soft(axe.violations.filter((v) => v.impact === "serious" || v.impact === "critical").map((v) => `${v.id}: ${v.help} (${v.nodes[0]?.target})`), view).toEqual([]);
+    await shot(page, info, `390-${view}`);
+  }
 });

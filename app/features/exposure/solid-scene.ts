@@ -105,6 +105,17 @@ export function mountSolidScene(host: HTMLElement, input: SceneInput, onFirstFra
   };
   controls.addEventListener("change", render);
   render();
+  // Follow the page's width (a window resized, a phone turned).
+  const resize = new ResizeObserver(() => {
+    const w = host.clientWidth;
+    const h = host.clientHeight;
+    if (!w || !h) return;
+    renderer.setSize(w, h);
+    camera.aspect = w / h;
+    camera.updateProjectionMatrix();
+    render();
+  });
+  resize.observe(host);
 
   return {
     redraw: (show: SceneInput["show"]) => {
@@ -112,6 +123,7 @@ export function mountSolidScene(host: HTMLElement, input: SceneInput, onFirstFra
       render();
     },
     dispose: () => {
+      resize.disconnect();
       controls.dispose();
       scene.traverse((o) => {
         if (o instanceof THREE.Mesh || o instanceof THREE.LineSegments) o.geometry.dispose();

@@ -49,8 +49,7 @@ export function SolidView({ emitters, surfaces, obstructions, options }: Props) 
       scene.current?.dispose();
       scene.current = null;
     };
-    // The scene is built once per page load; the toggles redraw it.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
+    // The scene is built once per page load (`show` is read then); the toggles redraw it.
   }, [emitters, surfaces, obstructions, options.standard]);
 
   useEffect(() => scene.current?.redraw(show), [show]);
