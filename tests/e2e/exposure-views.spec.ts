@@ -20,6 +20,8 @@ async function demoSite(page: Page) {
 
 test("elevation view: the cut along the strongest sector with both tiers' 100 % boundaries", async ({ page }, info) => {
   const site = await demoSite(page);
+  const scripts: string[] = [];
+  page.on("request", (r) => { if (r.resourceType() === "script") scripts.push(r.url()); });
   await visit(page, `${site}/exposure/section?standard=fcc&tier=general`);
   await expect(page.getByRole("heading", { name: /Elevation view/ })).toBeVisible();
   const chart = page.getByRole("img", { name: "Elevation view along the cut" });
@@ -41,14 +43,25 @@ test("elevation view: the cut along the strongest sector with both tiers' 100 % 
   await expect(page.getByText(/Cut from A \(/)).toBeVisible();
   await shot(page, info, "section-clicked");
 
+  // three.js is loaded by the 3D view only.
+  expect(scripts.length).toBeGreaterThan(0);
+  expect(scripts.filter((u) => /solid-scene/.test(u))).toEqual([]);
+
   // Back to the Exposure page, with the options.
   await expect(page.getByRole("link", { name: "← Exposure" })).toHaveAttribute("href", `${site}/exposure?standard=fcc&tier=general`);
 });
 
 test("3D view: the boundary solids render in a canvas that is not blank", async ({ page }, info) => {
   const site = await demoSite(page);
-  await visit(page, `${site}/exposure/solid`);
+  const errors: string[] = [];
+  page.on("console", (m) => { if (m.type() === "error") errors.push(m.text()); });
+  const response = await visit(page, `${site}/exposure/solid`);
+  // The worker is allowed by the page's policy, and nothing needs eval.
+  const csp = response!.headers()["content-security-policy"];
+  expect(csp).toContain("worker-src 'self' blob:");
+  expect(csp).not.toContain("unsafe-eval");
   await expect(page.getByTestId("solid-summary")).toContainText("Grid of", { timeout: 90_000 });
+  expect(errors).toEqual([]);
   const canvas = page.getByTestId("solid-canvas");
   await expect(canvas).toBeVisible();
   const { data, info: raw } = await sharp(await canvas.screenshot()).raw().toBuffer({ resolveWithObject: true });
