@@ -30,6 +30,10 @@ test("elevation view: the cut along the strongest sector with both tiers' 100 % 
   await expect(chart.getByText(/Main roof \+0\.0 m/)).toBeVisible();
   await expect(page.getByTestId("section-summary")).toContainText("Highest on this cut");
   await expect(page.getByRole("complementary", { name: "RF safety cautions" })).toBeVisible();
+  // Pointing at the drawing reads the value there for both tiers.
+  const c = (await chart.boundingBox())!;
+  await page.mouse.move(c.x + c.width * 0.3, c.y + c.height * 0.5);
+  await expect(page.getByTestId("section-readout")).toContainText(/m along, .* m high: .* of the general population limit · .* of the occupational limit/);
   await shot(page, info, "section-default");
 
   // Another cut: along an emitter on the penthouse; then one drawn by two clicks on the plan.

@@ -1,15 +1,17 @@
 // The elevation view's drawing: % of limit in colour over distance along the cut × height, the
 // levels as slabs with the people-height band above the walkable ones, obstructions in section,
 // antennas near the cut, and the 100 % boundary of each tier as labelled lines.
-import { useId, useMemo } from "react";
+import { useId, useMemo, useRef, useState, type MouseEvent } from "react";
 import type { Tier } from "~/engine";
-import { percentRgb } from "./colour-scale";
+import { percentLabel, percentRgb } from "./colour-scale";
 import { BoundaryLine } from "./section-legend";
 import type { LevelCrossing, SectionGrid, SolidCrossing } from "./section-geometry";
 
 type Props = {
   grid: SectionGrid;
   values: Float64Array;
+  /** What the pointer reads out: each tier's values with its name. */
+  readout?: { label: string; values: Float64Array }[];
   boundaries: { tier: Tier; label: string; lines: [number, number][][] }[];
   levels: LevelCrossing[];
   obstructions: SolidCrossing[];
@@ -50,8 +52,10 @@ function useFieldImage(grid: SectionGrid, values: Float64Array) {
   }, [grid, values]);
 }
 
-export function SectionChart({ grid, values, boundaries, levels, obstructions, antennas, people, width = 960 }: Props) {
+export function SectionChart({ grid, values, readout = [], boundaries, levels, obstructions, antennas, people, width = 960 }: Props) {
   const clipId = useId().replace(/:/g, "");
+  const svgRef = useRef<SVGSVGElement>(null);
+  const [pointer, setPointer] = useState<{ i: number; k: number } | null>(null);
   const href = useFieldImage(grid, values);
   const plotW = width - M.left - M.right;
   const sx = plotW / grid.length;
@@ -64,10 +68,18 @@ export function SectionChart({ grid, values, boundaries, levels, obstructions, a
   const height = M.top + plotH + M.bottom;
   const sTicks = ticks(0, grid.length, grid.length > 60 ? 10 : 5);
   const zTicks = ticks(grid.z0, zTop, (zTop - grid.z0) * ex > 30 ? 5 : 2);
+  const onMove = (event: MouseEvent<SVGSVGElement>) => {
+    const m = svgRef.current?.getScreenCTM();
+    if (!m) return;
+    const p = new DOMPoint(event.clientX, event.clientY).matrixTransform(m.inverse());
+    const i = Math.round((p.x - M.left) / sx / grid.step);
+    const k = Math.round((zTop - (p.y - M.top) / sz - grid.z0) / grid.step);
+    setPointer(i >= 0 && i < grid.ns && k >= 0 && k < grid.nz ? { i, k } : null);
+  };
   const path = (ring: [number, number][]) => ring.map(([s, z], i) => `${i ? "L" : "M"}${X(s).toFixed(1)} ${Y(z).toFixed(1)}`).join("");
 
   return (
-    <svg viewBox={`0 0 ${width} ${height}`} className="block h-auto w-full rounded-sheet border border-rule bg-white" role="img" aria-label="Elevation view along the cut">
+    <svg ref={svgRef} viewBox={`0 0 ${width} ${height}`} className="block h-auto w-full rounded-sheet border border-rule bg-white" role="img" aria-label="Elevation view along the cut" onMouseMove={onMove} onMouseLeave={() => setPointer(null)}>
       <defs>
         <clipPath id={`plot-${clipId}`}>
           <rect x={M.left} y={M.top} width={plotW} height={plotH} />
@@ -130,6 +142,15 @@ export function SectionChart({ grid, values, boundaries, levels, obstructions, a
         );
       })}
       <rect x={M.left} y={M.top} width={plotW} height={plotH} fill="none" className="stroke-ink-900" strokeWidth={1} />
+      {pointer && readout.length ? (
+        <g className="pointer-events-none" data-testid="section-readout">
+          <circle cx={X(pointer.i * grid.step)} cy={Y(grid.z0 + pointer.k * grid.step)} r={3} className="fill-white stroke-ink-900" strokeWidth={1.5} />
+          <text x={M.left + plotW - 8} y={M.top + 16} textAnchor="end" className="fill-ink-900 text-[11px] tabular-nums" stroke="white" strokeWidth={3.5} paintOrder="stroke">
+            {(pointer.i * grid.step).toFixed(1)} m along, {(grid.z0 + pointer.k * grid.step).toFixed(1)} m high:{" "}
+            {readout.map((r) => `${percentLabel(r.values[pointer.k * grid.ns + pointer.i])} of the ${r.label} limit`).join(" · ")}
+          </text>
+        </g>
+      ) : null}
       {sTicks.map((s) => (
         <g key={`s${s}`}>
           <line x1={X(s)} x2={X(s)} y1={M.top + plotH} y2={M.top + plotH + 5} className="stroke-ink-900" />

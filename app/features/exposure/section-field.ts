@@ -1,7 +1,7 @@
 // The elevation view's numbers: total % of each tier's limit at every sample of the cut, from the
 // engine (validated request, each emitter's constants hoisted once, then percentAt per point:
 // the same function the grids use), and the 100 % boundary of each tier as contour lines.
-import { accumulateRow, gridContours, parseRequest, prepareRequest, rowScratch, type EmitterInput, type GridAxes, type StandardId, type Tier } from "~/engine";
+import { accumulateRow, gridContours, parseRequest, powerDensityLimitWm2, prepareRequest, rowScratch, type EmitterInput, type GridAxes, type StandardId, type Tier } from "~/engine";
 import type { SectionGrid } from "./section-geometry";
 
 export type SectionField = { general: Float64Array; occupational: Float64Array };
@@ -17,11 +17,9 @@ export function preparedFor(emitters: EmitterInput[], standard: StandardId) {
   const parsed = parseRequest({ standard, tier: "general", emitters, points: [{ x: 0, y: 0, z: 0 }] });
   if (!parsed.ok) throw new Error(parsed.message);
   const general = prepareRequest(parsed.request, "general");
-  const occupational = prepareRequest(parsed.request, "occupational");
   return {
     general: general.prepared,
-    occupational: occupational.prepared,
-    toOccupational: general.summaries.map((s, e) => s.limitWm2 / occupational.summaries[e].limitWm2),
+    toOccupational: parsed.request.emitters.map((e, i) => general.summaries[i].limitWm2 / powerDensityLimitWm2(standard, "occupational", e.frequencyMHz)),
   };
 }
 

@@ -51,6 +51,7 @@ export function SectionView({ emitters, surfaces, obstructions, options }: Props
             <SectionChart
               grid={result.grid}
               values={result.field[tier]}
+              readout={(["general", "occupational"] as const).map((t) => ({ label: shortTier(options.standard, t), values: result.field[t] }))}
               boundaries={result.boundaries.map((b) => ({ ...b, label: `100 % ${shortTier(options.standard, b.tier)}` }))}
               levels={result.levels}
               obstructions={result.obstructions}

@@ -30,7 +30,8 @@ describe("3D grid", () => {
       const at = i + g.nx * (j + g.ny * k);
       const [x, y, z] = [g.x0 + i * g.step, g.y0 + j * g.step, g.z0 + k * g.step];
       expect(f.general[at]).toBeCloseTo(percentAt(pe.general[0], x, y, z), 3);
-      expect(f.occupational[at]).toBeCloseTo(percentAt(pe.occupational[0], x, y, z), 3);
+      // Above 1500 MHz the FCC occupational limit is five times the general one (50 vs 10 W/m²).
+      expect(f.occupational[at]).toBeCloseTo(percentAt(pe.general[0], x, y, z) / 5, 3);
     }
   });
 
