@@ -89,8 +89,18 @@ test("3D view: the boundary solids render in a canvas that is not blank", async 
   expect(Buffer.compare(before, await canvas.screenshot())).not.toBe(0);
 
   // Hiding the general-population solid changes the picture too.
+  const shown = await canvas.screenshot();
   await page.getByLabel("general population").uncheck();
+  expect(Buffer.compare(shown, await canvas.screenshot())).not.toBe(0);
   await shot(page, info, "solid");
+
+  // A finer grid: computed again, a smaller step.
+  const coarse = await page.getByTestId("solid-summary").innerText();
+  await page.getByLabel("Grid").selectOption("fine");
+  await expect(page.getByTestId("solid-summary")).not.toHaveText(coarse, { timeout: 120_000 });
+  await expect(page.getByTestId("solid-summary")).toContainText("Grid of");
+  const step = (text: string) => Number(text.match(/points, ([\d.]+)\s*m apart/)![1]);
+  expect(step(await page.getByTestId("solid-summary").innerText())).toBeLessThan(step(coarse));
 });
 
 test("planner: a work area in front of the west sector, the plan and the map after", async ({ page }, info) => {

@@ -46,6 +46,7 @@ export function PlannerView({ emitters, emitterInfo, surfaces, obstructions, acc
   const ok = result && "ok" in result ? result.ok : null;
   const off = ok ? ok.plan.changes.filter((c) => c.switchOff).map((c) => c.id) : [];
 
+  if (!emitters.length) return <p className="rounded-sheet border border-rule bg-sheet p-5 text-sm text-graphite-600">No emitter is on air at this site, so every work area is within the limits as predicted.</p>;
   return (
     <div className="space-y-6">
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]">

@@ -129,6 +129,7 @@ export function mountSolidScene(host: HTMLElement, input: SceneInput, onFirstFra
         if (o instanceof THREE.Mesh || o instanceof THREE.LineSegments) o.geometry.dispose();
       });
       renderer.dispose();
+      renderer.domElement.remove();
     },
   };
 }

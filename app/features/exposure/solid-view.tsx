@@ -9,6 +9,9 @@ import type { SolidMeshes } from "./solid-mesh";
 import { solidColours } from "./solid-style";
 
 type Props = { emitters: EmitterInput[]; surfaces: PlanSurface[]; obstructions: ObstructionLike[]; options: ExposureOptions };
+/** Grid sizes the reader can choose: more nodes, a finer step, a longer computation. */
+const detailNodes = { normal: 250_000, fine: 1_000_000 } as const;
+
 type Scene = { redraw: (show: { general: boolean; occupational: boolean }) => void; dispose: () => void };
 
 export function SolidView({ emitters, surfaces, obstructions, options }: Props) {
@@ -16,9 +19,11 @@ export function SolidView({ emitters, surfaces, obstructions, options }: Props) 
   const scene = useRef<Scene | null>(null);
   const [state, setState] = useState<{ kind: "working" } | { kind: "ready"; meshes: Omit<SolidMeshes, "general" | "occupational">; firstFrameMs: number } | { kind: "failed"; message: string }>({ kind: "working" });
   const [show, setShow] = useState({ general: true, occupational: true });
+  const [detail, setDetail] = useState<keyof typeof detailNodes>("normal");
 
   useEffect(() => {
     if (!emitters.length) return;
+    setState({ kind: "working" });
     const started = performance.now();
     let cancelled = false;
     const worker = new Worker(new URL("./solid.worker.ts", import.meta.url), { type: "module" });
@@ -27,7 +32,7 @@ export function SolidView({ emitters, surfaces, obstructions, options }: Props) 
       worker.onerror = (event) => reject(new Error(event.message || "The 3D computation stopped."));
     });
     const floorM = Math.min(0, ...surfaces.filter((s) => s.kind === "area").map((s) => s.elevationM ?? 0));
-    worker.postMessage({ emitters, standard: options.standard, floorM });
+    worker.postMessage({ emitters, standard: options.standard, floorM, maxNodes: detailNodes[detail] });
     Promise.all([meshes, import("./solid-scene")])
       .then(([m, { mountSolidScene }]) => {
         if (cancelled || !host.current) return;
@@ -50,7 +55,7 @@ export function SolidView({ emitters, surfaces, obstructions, options }: Props) 
       scene.current = null;
     };
     // The scene is built once per page load (`show` is read then); the toggles redraw it.
-  }, [emitters, surfaces, obstructions, options.standard]);
+  }, [emitters, surfaces, obstructions, options.standard, detail]);
 
   useEffect(() => scene.current?.redraw(show), [show]);
 
@@ -63,7 +68,7 @@ export function SolidView({ emitters, surfaces, obstructions, options }: Props) 
         <div className="relative aspect-[5/3] w-full overflow-hidden rounded-sheet border border-rule bg-sheet">
           {/* three.js owns this element's children; React renders none into it. */}
           <div ref={host} className="absolute inset-0" />
-          {state.kind === "working" ? <p className="absolute inset-0 p-5 text-sm text-graphite-600">Computing the boundaries in your browser…</p> : null}
+          {state.kind === "working" ? <p className="absolute inset-0 bg-sheet/80 p-5 text-sm text-graphite-600" role="status">Computing the boundaries in your browser…</p> : null}
         </div>
         {state.kind === "failed" ? <p className="text-sm text-danger-700">The 3D view could not be drawn: {state.message}</p> : null}
         {state.kind === "ready" ? (
@@ -86,6 +91,15 @@ export function SolidView({ emitters, surfaces, obstructions, options }: Props) 
             </label>
           ))}
         </fieldset>
+        <div>
+          <label htmlFor="solid-detail" className="block font-medium text-ink-900">
+            Grid
+          </label>
+          <select id="solid-detail" value={detail} onChange={(e) => setDetail(e.target.value as keyof typeof detailNodes)} className="mt-1 w-full rounded-control border border-rule-strong bg-sheet px-2 py-1.5">
+            <option value="normal">normal (up to 250 000 points)</option>
+            <option value="fine">fine (up to 1 000 000 points, slower)</option>
+          </select>
+        </div>
         <dl className="space-y-1 text-graphite-600">
           <div>
             <dt className="inline font-medium text-ink-900">Light grey slabs:</dt> <dd className="inline">walkable levels</dd>
