@@ -101,6 +101,8 @@ test("3D view: the boundary solids render in a canvas that is not blank", async 
   await expect(page.getByTestId("solid-summary")).toContainText("Grid of");
   const step = (text: string) => Number(text.match(/points, ([\d.]+)\s*m apart/)![1]);
   expect(step(await page.getByTestId("solid-summary").innerText())).toBeLessThan(step(coarse));
+  await page.getByLabel("general population").check();
+  await shot(page, info, "solid-fine");
 });
 
 test("planner: a work area in front of the west sector, the plan and the map after", async ({ page }, info) => {
