@@ -26,6 +26,8 @@ export default [
       route(":siteId", "routes/sites/site.tsx", [
         index("routes/sites/layout.tsx"),
         route("edit", "routes/sites/edit.tsx"),
+        route("layout", "routes/sites/layout-edit.tsx"),
+        route("emitters", "routes/sites/emitters.tsx"),
         route("history", "routes/sites/history.tsx"),
         route("visits", "routes/sites/visits.tsx"),
         route("visits/new", "routes/sites/visit-new.tsx"),
@@ -37,6 +39,7 @@ export default [
       ]),
     ]),
     route("history", "routes/history/organization.tsx"),
+    route("patterns", "routes/patterns/patterns.tsx"),
     // Unknown addresses: the 404 inside the shell, with navigation when signed in.
     route("*", "routes/not-found.tsx"),
   ]),
@@ -52,6 +55,11 @@ export default [
     route("v1/sites", "routes/api/v1/sites.ts"),
     route("v1/sites/:siteId", "routes/api/v1/site.ts"),
     route("v1/sites/:siteId/history", "routes/api/v1/site-history.ts"),
+    route("v1/sites/:siteId/surfaces", "routes/api/v1/site-surfaces.ts"),
+    route("v1/sites/:siteId/backdrop", "routes/api/v1/site-backdrop.ts"),
+    route("v1/sites/:siteId/emitters", "routes/api/v1/site-emitters.ts"),
+    route("v1/sites/:siteId/emitters/csv", "routes/api/v1/site-emitters-csv.ts"),
+    route("v1/patterns", "routes/api/v1/patterns.ts"),
     route("v1/sites/:siteId/visits", "routes/api/v1/site-visits.ts"),
     route("v1/visits/:visitId", "routes/api/v1/visit.ts"),
     route("v1/visits/:visitId/photos", "routes/api/v1/visit-photos.ts"),

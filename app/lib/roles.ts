@@ -29,6 +29,7 @@ export const sections = {
   overview: { path: "/", label: "Overview", roles: roles },
   sites: { path: "/sites", label: "Sites", roles: staffRoles },
   clients: { path: "/clients", label: "Clients", roles: staffRoles },
+  patterns: { path: "/patterns", label: "Patterns", roles: staffRoles },
   history: { path: "/history", label: "History", roles: ["owner"] },
   members: { path: "/members", label: "Members", roles: ["owner"] },
   account: { path: "/account", label: "Account", roles: roles },

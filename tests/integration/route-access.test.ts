@@ -97,6 +97,11 @@ const cases: Case[] = [
   { file: "routes/api/v1/sites.ts", method: "action", path: () => "/api/v1/sites", json: {}, expect: apiRoles(inventoryEditors, "bad-request") },
   { file: "routes/api/v1/site.ts", method: "loader", path: () => `/api/v1/sites/${siteId}`, params: () => ({ siteId }), expect: apiRoles(staffRoles, "ok") },
   { file: "routes/api/v1/site.ts", method: "action", path: () => `/api/v1/sites/${siteId}`, method2: "PATCH", json: {}, params: () => ({ siteId }), expect: apiRoles(inventoryEditors, "bad-request") },
+  { file: "routes/sites/layout-edit.tsx", method: "loader", path: () => `/sites/${siteId}/layout`, params: () => ({ siteId }), expect: rolesIn(inventoryEditors, "ok") },
+  { file: "routes/api/v1/site-surfaces.ts", method: "loader", path: () => `/api/v1/sites/${siteId}/surfaces`, params: () => ({ siteId }), expect: apiRoles(staffRoles, "ok") },
+  { file: "routes/api/v1/site-surfaces.ts", method: "action", path: () => `/api/v1/sites/${siteId}/surfaces`, method2: "PUT", json: {}, params: () => ({ siteId }), expect: apiRoles(inventoryEditors, "bad-request") },
+  // A JSON body is not a multipart upload: 415 once the guard lets the member through.
+  { file: "routes/api/v1/site-backdrop.ts", method: "action", path: () => `/api/v1/sites/${siteId}/backdrop`, json: {}, params: () => ({ siteId }), expect: apiRoles(inventoryEditors, "unsupported") },
   { file: "routes/api/v1/site-history.ts", method: "loader", path: () => `/api/v1/sites/${siteId}/history`, params: () => ({ siteId }), expect: apiRoles(staffRoles, "ok") },
   { file: "routes/exposure/section.tsx", method: "loader", path: () => `/sites/${siteId}/exposure/section`, params: () => ({ siteId }), expect: rolesIn(staffRoles, "ok") },
   { file: "routes/exposure/solid.tsx", method: "loader", path: () => `/sites/${siteId}/exposure/solid`, params: () => ({ siteId }), expect: rolesIn(staffRoles, "ok") },
@@ -121,6 +126,17 @@ const cases: Case[] = [
   { file: "routes/api/v1/tokens.ts", method: "action", path: () => "/api/v1/tokens", json: {}, expect: apiRoles(roles, "bad-request") },
   { file: "routes/api/v1/token.ts", method: "action", path: () => "/api/v1/tokens/nope", method2: "DELETE", params: () => ({ tokenId: "nope" }), expect: apiRoles(roles, "not-found") },
   { file: "routes/history/organization.tsx", method: "loader", path: () => "/history", expect: rolesIn(["owner"], "ok") },
+  { file: "routes/sites/emitters.tsx", method: "loader", path: () => `/sites/${siteId}/emitters`, params: () => ({ siteId }), expect: rolesIn(staffRoles, "ok") },
+  { file: "routes/sites/emitters.tsx", method: "action", path: () => `/sites/${siteId}/emitters`, form: {}, params: () => ({ siteId }), expect: rolesIn(inventoryEditors, "bad-request") },
+  { file: "routes/patterns/patterns.tsx", method: "loader", path: () => "/patterns", expect: rolesIn(staffRoles, "ok") },
+  { file: "routes/patterns/patterns.tsx", method: "action", path: () => "/patterns", form: {}, expect: rolesIn(inventoryEditors, "bad-request") },
+  { file: "routes/api/v1/site-emitters.ts", method: "loader", path: () => `/api/v1/sites/${siteId}/emitters`, params: () => ({ siteId }), expect: apiRoles(staffRoles, "ok") },
+  { file: "routes/api/v1/site-emitters.ts", method: "action", path: () => `/api/v1/sites/${siteId}/emitters`, method2: "PUT", json: {}, params: () => ({ siteId }), expect: apiRoles(inventoryEditors, "bad-request") },
+  { file: "routes/api/v1/site-emitters-csv.ts", method: "loader", path: () => `/api/v1/sites/${siteId}/emitters/csv`, params: () => ({ siteId }), expect: apiRoles(staffRoles, "ok") },
+  // A JSON body is not a CSV file: 415 once the guard lets the member through.
+  { file: "routes/api/v1/site-emitters-csv.ts", method: "action", path: () => `/api/v1/sites/${siteId}/emitters/csv`, json: {}, params: () => ({ siteId }), expect: apiRoles(inventoryEditors, "unsupported") },
+  { file: "routes/api/v1/patterns.ts", method: "loader", path: () => "/api/v1/patterns", expect: apiRoles(staffRoles, "ok") },
+  { file: "routes/api/v1/patterns.ts", method: "action", path: () => "/api/v1/patterns", json: {}, expect: apiRoles(inventoryEditors, "bad-request") },
   // Last: signing out revokes the fixture sessions.
   { file: "routes/auth/sign-out.ts", method: "action", path: () => "/sign-out", form: {}, expect: () => "signed-out" },
 ];
