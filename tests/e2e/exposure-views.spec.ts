@@ -109,10 +109,15 @@ test("planner: a work area in front of the west sector, the plan and the map aft
   const site = await demoSite(page);
   await visit(page, `${site}/exposure/planner`);
   const plan = page.getByRole("img", { name: /click the corners/ });
+  // Site metres to the screen through the plan's own frame (its data-bounds and viewBox).
+  const [minX, , maxX, maxY] = (await plan.getAttribute("data-bounds"))!.split(" ").map(Number);
+  const [, , vbW, vbH] = (await plan.getAttribute("viewBox"))!.split(" ").map(Number);
   const box = (await plan.boundingBox())!;
-  // The demo plan's frame (x −21…61 m, y −3…33 m, 960 × 421 px plus a 40 px footer): the square x 2…8 m, y 9…15 m
-  // on the main roof, in front of SM-3-2100 (at x 0.4 m, y 12 m, facing 70°).
-  const at = (x: number, y: number) => [box.x + (box.width * (x + 21)) / 82, box.y + (box.height * ((33 - y) * (960 / 82))) / 461] as const;
+  const k = box.width / vbW;
+  const scale = vbW / (maxX - minX);
+  expect(Math.abs(box.height / k - vbH)).toBeLessThan(2);
+  const at = (x: number, y: number) => [box.x + (x - minX) * scale * k, box.y + (maxY - y) * scale * k] as const;
+  // The square x 2…8 m, y 9…15 m on the main roof, in front of SM-3-2100 (at x 0.4 m, y 12 m, facing 70°).
   for (const [x, y] of [[2, 9], [8, 9], [8, 15], [2, 15]] as const) await page.mouse.click(...at(x, y));
   await expect(page.getByTestId("planner-corners")).toHaveText("4 corners");
   await page.mouse.click(...at(2.1, 9.1)); // the first corner again closes it

@@ -3,6 +3,7 @@
 import { useMemo, useState } from "react";
 import type { EmitterInput, Tier } from "~/engine";
 import { Button } from "~/components/button";
+import { boundsOf } from "~/features/layout/plan-frame";
 import { SitePlan, type PlanAccessPoint } from "~/features/layout/site-plan";
 import { percentLabel } from "./colour-scale";
 import { tierLabels, type ExposureOptions } from "./options";
@@ -26,7 +27,12 @@ export function PlannerView({ emitters, emitterInfo, surfaces, obstructions, acc
   const areas = surfaces.filter((s) => s.kind === "area" && s.polygon && s.polygon.length >= 3);
   const level = levelChoice === "auto" ? levelUnder(drawing.points, areas) : (areas.find((s) => s.id === levelChoice) ?? null);
   const tierName = (t: Tier) => tierLabels[options.standard][t].split(" / ")[0];
-  const planSurfaces = surfaces.map((s) => ({ ...s }));
+  const planSurfaces = surfaces;
+  // The frame stays still while the area is drawn (its corners never move the plan under the pointer).
+  const planBounds = useMemo(
+    () => boundsOf([...surfaces.flatMap((s) => [...(s.polygon ?? []), ...(s.line ?? [])]), ...obstructions.flatMap((o) => o.polygon), ...accessPoints.map((a): XY => [a.x, a.y]), ...emitters.map((e): XY => [e.position.x, e.position.y])]),
+    [surfaces, obstructions, accessPoints, emitters],
+  );
   const marks = (frame: Parameters<typeof EmitterMarks>[0]["frame"], dim: string[] = []) => <EmitterMarks frame={frame} emitters={emitters} dim={dim} />;
 
   const result = useMemo(() => {
@@ -51,7 +57,7 @@ export function PlannerView({ emitters, emitterInfo, surfaces, obstructions, acc
     <div className="space-y-6">
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]">
         <div className="min-w-0 space-y-2">
-          <SitePlan title="Plan: click the corners of the work area" surfaces={planSurfaces} obstructions={obstructions} accessPoints={accessPoints} onSiteClick={add} draft={drawing.closed ? undefined : drawing.points}>
+          <SitePlan title="Plan: click the corners of the work area" surfaces={planSurfaces} obstructions={obstructions} accessPoints={accessPoints} onSiteClick={(p) => add(p)} draft={drawing.closed ? undefined : drawing.points} bounds={planBounds}>
             {(frame) => (
               <>
                 {marks(frame)}
@@ -149,7 +155,7 @@ export function PlannerView({ emitters, emitterInfo, surfaces, obstructions, acc
           ) : null}
           <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]">
             <div className="min-w-0">
-              <SitePlan title={`Map of ${level!.name} after the changes`} surfaces={planSurfaces} obstructions={obstructions} accessPoints={accessPoints}>
+              <SitePlan title={`Map of ${level!.name} after the changes`} surfaces={planSurfaces} obstructions={obstructions} accessPoints={accessPoints} bounds={planBounds}>
                 {(frame) => (
                   <>
                     <LevelMapLayer frame={frame} maps={ok.after} />

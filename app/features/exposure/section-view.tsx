@@ -89,7 +89,7 @@ export function SectionView({ emitters, surfaces, obstructions, options }: Props
           </select>
           <p className="mt-1 text-xs text-graphite-600">Or click two points on the plan below.</p>
         </div>
-        <SitePlan title="Plan: where the cut runs" surfaces={surfaces} obstructions={obstructions} extraPoints={cut ? [cut.a, cut.b] : undefined} width={480} onSiteClick={onPlanClick} draft={through === "points" && clicked.length === 1 ? clicked : undefined}>
+        <SitePlan title="Plan: where the cut runs" surfaces={surfaces} obstructions={obstructions} extraPoints={cut ? [cut.a, cut.b] : undefined} width={480} onSiteClick={(p) => onPlanClick(p)} draft={through === "points" && clicked.length === 1 ? clicked : undefined}>
           {(frame) => (
             <>
               <EmitterMarks frame={frame} emitters={emitters} />
