@@ -159,6 +159,10 @@ export function PlannerView({ emitters, emitterInfo, surfaces, obstructions, acc
                 {(frame) => (
                   <>
                     <LevelMapLayer frame={frame} maps={ok.after} />
+                    {/* Obstructions again above the colours, so they stay visible. */}
+                    {obstructions.map((o) => (
+                      <path key={o.id} d={o.polygon.map((p, i) => `${i ? "L" : "M"}${frame.toPx(...p).join(" ")}`).join("") + "Z"} fill="url(#plan-solid)" className="stroke-graphite-600" strokeWidth={1.25} />
+                    ))}
                     <MapContours frame={frame} maps={ok.before} dash="5 4" className="stroke-graphite-600" />
                     {marks(frame, off)}
                     {outline(frame, drawing.points)}
