@@ -1,7 +1,7 @@
 // The Content-Security-Policy of the app's HTML pages, in one place. Scripts run only from this
 // origin or with the per-request nonce React Router puts on its inline hydration scripts.
 // Non-HTML answers get the server's stricter default (server/security-headers.mjs).
-// Later work extends the directives here: worker-src 'self' blob: for the exposure worker, and so on.
+// Later work extends the directives here.
 import { randomBytes } from "node:crypto";
 
 export const createNonce = () => randomBytes(16).toString("base64");
@@ -15,7 +15,8 @@ export function contentSecurityPolicy(nonce: string, { dev = false } = {}) {
     "img-src": ["'self'", "data:", "blob:"],
     "font-src": ["'self'"],
     "connect-src": ["'self'"],
-    // The Exposure page's what-if Web Worker: a module worker from this origin (blob: for Vite's dev server).
+    // The exposure pages' Web Workers (what-if, the 3D view's grid and marching cubes): same-origin
+    // module scripts, or blob: URLs where a bundler inlines a worker. No 'unsafe-eval' anywhere.
     "worker-src": ["'self'", "blob:"],
     "frame-ancestors": ["'none'"],
     "base-uri": ["'none'"],

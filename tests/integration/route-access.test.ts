@@ -105,6 +105,9 @@ const cases: Case[] = [
   // A JSON body is not a multipart upload: 415 once the guard lets the member through.
   { file: "routes/api/v1/site-backdrop.ts", method: "action", path: () => `/api/v1/sites/${siteId}/backdrop`, json: {}, params: () => ({ siteId }), expect: apiRoles(inventoryEditors, "unsupported") },
   { file: "routes/api/v1/site-history.ts", method: "loader", path: () => `/api/v1/sites/${siteId}/history`, params: () => ({ siteId }), expect: apiRoles(staffRoles, "ok") },
+  { file: "routes/exposure/section.tsx", method: "loader", path: () => `/sites/${siteId}/exposure/section`, params: () => ({ siteId }), expect: rolesIn(staffRoles, "ok") },
+  { file: "routes/exposure/solid.tsx", method: "loader", path: () => `/sites/${siteId}/exposure/solid`, params: () => ({ siteId }), expect: rolesIn(staffRoles, "ok") },
+  { file: "routes/exposure/planner.tsx", method: "loader", path: () => `/sites/${siteId}/exposure/planner`, params: () => ({ siteId }), expect: rolesIn(staffRoles, "ok") },
   { file: "routes/sites/visits.tsx", method: "loader", path: () => `/sites/${siteId}/visits`, params: () => ({ siteId }), expect: rolesIn(staffRoles, "ok") },
   { file: "routes/sites/visit-new.tsx", method: "loader", path: () => `/sites/${siteId}/visits/new`, params: () => ({ siteId }), expect: rolesIn(inventoryEditors, "ok") },
   { file: "routes/sites/visit-new.tsx", method: "action", path: () => `/sites/${siteId}/visits/new`, form: {}, params: () => ({ siteId }), expect: rolesIn(inventoryEditors, "bad-request") },

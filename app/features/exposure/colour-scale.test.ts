@@ -1,7 +1,7 @@
 // The map's colour scale: viridis (reversed) on a log axis of % of limit, 1 % to 1000 %.
 import { interpolateViridis } from "d3-scale-chromatic";
 import { describe, expect, it } from "vitest";
-import { bandColour, bandThresholds, colourOf, formatPercent, legendTicks, scalePosition } from "./colour-scale";
+import { bandColour, bandThresholds, colourOf, colourPosition, formatPercent, legendTicks, percentColour, percentLabel, percentRgb, scalePosition } from "./colour-scale";
 
 describe("colour scale", () => {
   it("places percentages on a log axis: each decade a third of the bar (common practice, no source)", () => {
@@ -48,5 +48,28 @@ describe("colour scale", () => {
     expect(formatPercent(12.345)).toBe("12.3 %");
     expect(formatPercent(0.012345)).toBe("0.0123 %");
     expect(formatPercent(0)).toBe("0 %");
+  });
+});
+
+describe("the same scale for the elevation and planner views (log axis from 1 % to 1000 %: common practice, no source)", () => {
+  it("places percentages on the map's log axis, clamped at the ends", () => {
+    expect(colourPosition(1)).toBe(0);
+    expect(colourPosition(0)).toBe(0);
+    expect(colourPosition(10)).toBeCloseTo(1 / 3, 12);
+    expect(colourPosition(100)).toBeCloseTo(2 / 3, 12);
+    expect(colourPosition(5000)).toBe(1);
+  });
+  it("gives the map's colours, the lightest below 1 %, and the same as bytes", () => {
+    expect(percentColour(100)).toBe(colourOf(100));
+    expect(percentColour(0.2)).toBe(interpolateViridis(1));
+    const hex = (rgb: number[]) => `#${rgb.map((v) => v.toString(16).padStart(2, "0")).join("")}`;
+    expect(hex(percentRgb(100))).toBe(interpolateViridis(1 - Math.round((2 / 3) * 1023) / 1023));
+    expect(percentRgb(1000)).toEqual([68, 1, 84]); // viridis' first colour, #440154, for the most exposure
+  });
+  it("labels percentages briefly", () => {
+    expect(percentLabel(0.04)).toBe("0.04 %");
+    expect(percentLabel(2.46)).toBe("2.5 %");
+    expect(percentLabel(277.78)).toBe("278 %");
+    expect(percentLabel(12345)).toBe("12 345 %");
   });
 });

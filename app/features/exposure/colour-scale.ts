@@ -61,3 +61,46 @@ export function formatPercent(percent: number): string {
   const text = Math.abs(rounded) >= 1000 ? Math.round(rounded).toString().replace(/\B(?=(\d{3})+(?!\d))/g, "\u2009") : String(rounded);
   return `${text} %`;
 }
+
+// ---- The same scale for views that fill every cell (elevation cut, planner map): values below
+// 1 % take the lightest colour instead of no fill, and colours come as bytes for canvases.
+
+/** The scale's ends, in % of the limit. */
+export const COLOUR_DOMAIN: readonly [number, number] = [SCALE_MIN_PERCENT, SCALE_MAX_PERCENT];
+/** Ticks for the views' legends. */
+export const COLOUR_TICKS = [1, 3, 10, 30, 100, 300, 1000] as const;
+
+/** Position 0…1 of a percentage on the log axis (0 at 1 %, 1 at 1000 %), clamped. */
+export const colourPosition = scalePosition;
+
+/** The CSS colour of a percentage: the map's colour, and the lightest one below 1 %. */
+export function percentColour(percent: number): string {
+  return interpolateViridis(1 - colourPosition(percent));
+}
+
+/** 1024 steps of the reversed ramp as bytes, made once, for painting cells by the thousand. */
+let lut: Uint8Array | null = null;
+function ramp() {
+  if (lut) return lut;
+  lut = new Uint8Array(1024 * 3);
+  for (let n = 0; n < 1024; n++) {
+    const hex = interpolateViridis(1 - n / 1023); // "#rrggbb"
+    for (let c = 0; c < 3; c++) lut[n * 3 + c] = parseInt(hex.slice(1 + 2 * c, 3 + 2 * c), 16);
+  }
+  return lut;
+}
+
+/** The colour as [r, g, b] 0…255 (canvases), from the ramp at 1/1023 steps. */
+export function percentRgb(percent: number): [number, number, number] {
+  const t = ramp();
+  const n = Math.round(colourPosition(percent) * 1023) * 3;
+  return [t[n], t[n + 1], t[n + 2]];
+}
+
+/** "0.5 %", "12 %", "1 200 %": short labels for ticks and contours. */
+export function percentLabel(percent: number): string {
+  if (percent >= 1000) return `${Math.round(percent).toLocaleString("en-GB").replace(/,/g, " ")} %`;
+  if (percent >= 10) return `${Math.round(percent)} %`;
+  if (percent >= 1) return `${Number(percent.toFixed(1))} %`;
+  return `${Number(percent.toPrecision(1))} %`;
+}

@@ -1,0 +1,28 @@
+import { RfCautions } from "~/components/cautions";
+import { requireMember } from "~/features/auth/guard.server";
+import { SolidView } from "~/features/exposure/solid-view";
+import { ViewHeader } from "~/features/exposure/view-header";
+import { loadViewData } from "~/features/exposure/view-data.server";
+import { scopeOf } from "~/features/sites/scope.server";
+import { staffRoles } from "~/lib/roles";
+import type { Route } from "./+types/solid";
+
+export const meta: Route.MetaFunction = ({ data }) => [{ title: data ? `3D view · ${data.site.name} · Isotrope` : "3D view · Isotrope" }];
+
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const member = await requireMember({ request, context }, { roles: staffRoles });
+  return loadViewData(scopeOf(member), params.siteId, new URL(request.url));
+}
+
+export default function SolidPage({ loaderData }: Route.ComponentProps) {
+  const { site, options, optionErrors, emitters, surfaces, obstructions } = loaderData;
+  return (
+    <section aria-labelledby="view-title" className="space-y-6">
+      <ViewHeader title="3D view" siteName={site.name} options={options} optionErrors={optionErrors} />
+      <SolidView emitters={emitters} surfaces={surfaces} obstructions={obstructions} options={options} />
+      <RfCautions />
+    </section>
+  );
+}
+
+export { RouteError as ErrorBoundary } from "~/components/route-error";
