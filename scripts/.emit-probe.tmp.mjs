@@ -13,7 +13,7 @@ const site = list.sites.sort((a, b) => b.emitterCount - a.emitterCount)[0].id;
 await page.goto(`${base}/sites/${site}/emitters`);
 console.log(await page.evaluate(() => {
   const out = [];
-  for (const el of document.querySelectorAll("body *")) { const r = el.getBoundingClientRect(); if (r.right > 1290) out.push(`${el.tagName}.${el.className?.baseVal ?? el.className} ${Math.round(r.right)}`); }
+  for (const el of document.querySelectorAll("body *")) { const r = el.getBoundingClientRect(); if (r.right > 1285 && getComputedStyle(el).position !== "static") out.push(`${el.tagName}.${el.className?.baseVal ?? el.className} ${Math.round(r.right)}`); }
   return out.slice(0, 10).join("\n") + `\nscrollWidth ${document.documentElement.scrollWidth}`;
 }));
 await browser.close();
