@@ -268,7 +268,7 @@ describe("the pattern library", () => {
     const listed = await callApi(patternsApi, "GET", "/api/v1/patterns", { auth: { token } });
     expect(listed.body.patterns.map((p: { name: string }) => p.name)).toEqual(expect.arrayContaining(["Measured panel", "F.1336 65/7"]));
     const [event] = await db.select().from(schema.auditEvent).where(eq(schema.auditEvent.subjectId, tab.body.pattern.id));
-    expect(event).toMatchObject({ action: "pattern.created", subjectType: "antenna_pattern" });
+    expect(event).toMatchObject({ action: "pattern.created", subjectType: "pattern" });
   });
 
   it("names invalid fields", async () => {
