@@ -1,5 +1,5 @@
 // What History records of a row: its own fields, without bookkeeping columns.
-const bookkeeping = new Set(["organizationId", "createdAt", "updatedAt", "version"]);
+const bookkeeping = new Set(["organizationId", "createdAt", "updatedAt", "version", "emitterCount"]);
 
 export function snapshot(row: Record<string, unknown>): Record<string, unknown> {
   return Object.fromEntries(Object.entries(row).filter(([k]) => !bookkeeping.has(k)));

@@ -15,6 +15,8 @@ export const MiB = 1024 * 1024;
 export const largeBodyRoutes = [
   { path: "/api/v1/visits/:visitId/photos", limit: 10 * MiB + 64 * 1024 }, // app/features/visits/limits.ts
   { path: "/api/v1/visits/:visitId/readings", limit: 2 * MiB },
+  { path: "/api/v1/sites/:siteId/surfaces", limit: 2 * MiB }, // app/features/layout/limits.ts
+  { path: "/api/v1/sites/:siteId/backdrop", limit: 10 * MiB + 64 * 1024 },
   { path: "/api/v1/sites/:siteId/emitters", limit: 2 * MiB }, // app/features/emitters/limits.ts
   { path: "/api/v1/sites/:siteId/emitters/csv", limit: 5 * MiB },
   { path: "/api/v1/patterns", limit: 1 * MiB },

@@ -1,12 +1,12 @@
 // The gate lets each upload route's body through at the size the route itself enforces: the
 // features' limit modules and the gate's table name the same paths and numbers.
 import { describe, expect, it } from "vitest";
+import { layoutUploadLimits } from "~/features/layout/limits";
 import { visitUploadLimits } from "~/features/visits/limits";
 import { emitterUploadLimits } from "~/features/emitters/limits";
 import { bodyLimitFor, DEFAULT_BODY_LIMIT, largeBodyRoutes } from "./limits.mjs";
 
-const featureLimits = [...visitUploadLimits];
-featureLimits.push(...(emitterUploadLimits as unknown as typeof featureLimits));
+const featureLimits = [...visitUploadLimits, ...layoutUploadLimits, ...emitterUploadLimits];
 
 describe("large-body routes", () => {
   it("lists every feature's upload path with the feature's own limit", () => {

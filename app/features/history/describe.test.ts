@@ -21,4 +21,13 @@ describe("history in words", () => {
       { field: "Frequency (MHz)", before: "1900", after: "2100" },
     ]);
   });
+
+  it("names the records a change points at, and hides internal links", () => {
+    const rows = changeRows(null, { name: "Tower", clientId: "c1", patternId: "p-gone", fileId: "f1", visitId: "v1" }, { c1: "Larch & Co" });
+    expect(rows).toEqual([
+      { field: "Name", before: "", after: "Tower" },
+      { field: "Client", before: "", after: "Larch & Co" },
+      { field: "Pattern", before: "", after: "a removed record" },
+    ]);
+  });
 });

@@ -81,6 +81,14 @@ const fieldLabels: Record<string, string> = {
   access: "Who may be there",
   baseM: "Base (m)",
   heightM: "Height (m)",
+  locked: "Locked",
+  p1: "Scale point 1 (px)",
+  p2: "Scale point 2 (px)",
+  distanceM: "Distance between the scale points (m)",
+  originX: "Scale point 1 at x (m)",
+  originY: "Scale point 1 at y (m)",
+  rotationDeg: "Turn (° clockwise)",
+  opacity: "Opacity",
   visitedOn: "Date",
   people: "People",
   conditions: "Conditions",
@@ -121,10 +129,19 @@ export function showValue(value: unknown): string {
   return JSON.stringify(value);
 }
 
-/** Field-by-field rows of a change: every field in before or after whose value differs. */
-export function changeRows(before: Record<string, unknown> | null, after: Record<string, unknown> | null) {
-  const keys = [...new Set([...Object.keys(before ?? {}), ...Object.keys(after ?? {})])].filter((k) => k !== "id" && k !== "siteId");
+/** Internal links that mean nothing to a reader (the record's own label already says which). */
+const hiddenFields = new Set(["id", "siteId", "visitId", "fileId", "organizationId"]);
+const referenceFields = new Set(["clientId", "patternId", "surfaceId"]);
+
+/**
+ * Field-by-field rows of a change: every field in before or after whose value differs. Fields that
+ * point at another record show its name from `names` (id → name), or "a removed record".
+ */
+export function changeRows(before: Record<string, unknown> | null, after: Record<string, unknown> | null, names: Record<string, string> = {}) {
+  const keys = [...new Set([...Object.keys(before ?? {}), ...Object.keys(after ?? {})])].filter((k) => !hiddenFields.has(k));
+  const show = (k: string, value: unknown) =>
+    referenceFields.has(k) && typeof value === "string" ? (names[value] ?? "a removed record") : showValue(value);
   return keys
     .filter((k) => JSON.stringify(before?.[k] ?? null) !== JSON.stringify(after?.[k] ?? null))
-    .map((k) => ({ field: fieldLabel(k), before: before ? showValue(before[k]) : "", after: after ? showValue(after[k]) : "" }));
+    .map((k) => ({ field: fieldLabel(k), before: before ? show(k, before[k]) : "", after: after ? show(k, after[k]) : "" }));
 }

@@ -15,12 +15,12 @@ export type HistoryEvent = {
   detail?: Record<string, unknown> | null;
 };
 
-export function HistoryList({ events, empty, context }: { events: HistoryEvent[]; empty: string; context?: (e: HistoryEvent) => React.ReactNode }) {
+export function HistoryList({ events, names = {}, empty, context }: { events: HistoryEvent[]; names?: Record<string, string>; empty: string; context?: (e: HistoryEvent) => React.ReactNode }) {
   if (events.length === 0) return <p className="rounded-sheet border border-dashed border-rule px-6 py-10 text-center text-sm text-graphite-600">{empty}</p>;
   return (
     <ol className="space-y-3">
       {events.map((e) => {
-        const rows = changeRows(e.before, e.after);
+        const rows = changeRows(e.before, e.after, names);
         const label = recordLabel(e.after) ?? recordLabel(e.before);
         return (
           <li key={e.id} className="rounded-sheet border border-rule bg-white p-4">

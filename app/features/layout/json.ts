@@ -1,11 +1,46 @@
-// Surfaces as the JSON API shows and takes them (issue contract):
-// { id, name, kind: "area" | "facade", polygon | line, elevationM | bottomM, topM, access }.
+// Layout records as the JSON API shows and takes them (issue contract):
+// { id, name, kind: "area" | "facade", polygon | line, elevationM | bottomM, topM, access },
+// plus obstructions, access points and the roof drawing's placement.
 import type { schema } from "~/infra/db.server";
 
 type SurfaceRow = typeof schema.surface.$inferSelect;
+type ObstructionRow = typeof schema.obstruction.$inferSelect;
+type AccessPointRow = typeof schema.accessPoint.$inferSelect;
+type BackdropRow = typeof schema.siteBackdrop.$inferSelect;
 
 export function surfaceJson(row: SurfaceRow) {
   return row.kind === "facade"
     ? { id: row.id, name: row.name, kind: "facade" as const, line: row.line, bottomM: row.bottomM, topM: row.topM, access: row.access }
     : { id: row.id, name: row.name, kind: "area" as const, polygon: row.polygon, elevationM: row.elevationM, access: row.access };
 }
+
+export function obstructionJson(row: ObstructionRow) {
+  return { id: row.id, name: row.name, polygon: row.polygon, baseM: row.baseM, heightM: row.heightM };
+}
+
+export function accessPointJson(row: AccessPointRow) {
+  return { id: row.id, name: row.name, kind: row.kind, x: row.x, y: row.y, z: row.z, locked: row.locked };
+}
+
+/** The roof drawing under the plan: its file (served at /files/:fileId) and where it lies. */
+export function backdropJson(row: BackdropRow) {
+  return {
+    fileId: row.fileId,
+    href: `/files/${row.fileId}`,
+    widthPx: row.widthPx,
+    heightPx: row.heightPx,
+    p1: row.p1,
+    p2: row.p2,
+    distanceM: row.distanceM,
+    originX: row.originX,
+    originY: row.originY,
+    rotationDeg: row.rotationDeg,
+    opacity: row.opacity,
+  };
+}
+
+export type SurfaceJson = ReturnType<typeof surfaceJson>;
+export type ObstructionJson = ReturnType<typeof obstructionJson>;
+export type AccessPointJson = ReturnType<typeof accessPointJson>;
+export type BackdropJson = ReturnType<typeof backdropJson>;
+export type LayoutJson = { version: number; surfaces: SurfaceJson[]; obstructions: ObstructionJson[]; accessPoints: AccessPointJson[]; backdrop: BackdropJson | null };

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { boundsOf, makeFrame, scaleBarMetres, snap } from "./plan-frame";
+import { backdropCorners, backdropToSite, boundsOf, makeFrame, scaleBarMetres, snap } from "./plan-frame";
 
 describe("plan frame", () => {
   const frame = makeFrame({ minX: 0, minY: 0, maxX: 40, maxY: 20 }, { width: 920, margin: 3 });
@@ -42,5 +42,19 @@ describe("plan frame", () => {
   it("picks a 1-2-5 scale bar near a quarter of the width", () => {
     expect(scaleBarMetres(frame)).toBe(10);
     expect(scaleBarMetres(makeFrame({ minX: 0, minY: 0, maxX: 200, maxY: 100 }, { margin: 0 }))).toBe(50);
+  });
+
+  it("places a roof drawing from two points a known distance apart (common practice, no source)", () => {
+    // 200 px between the points standing for 10 m: 0.05 m per pixel; p1 lands on (5, 5).
+    const b = { widthPx: 400, heightPx: 200, p1: [100, 100] as [number, number], p2: [300, 100] as [number, number], distanceM: 10, originX: 5, originY: 5, rotationDeg: 0 };
+    expect(backdropToSite(b, 100, 100)).toEqual([5, 5]);
+    expect(backdropToSite(b, 300, 100)).toEqual([15, 5]);
+    // Image y runs down, site y runs north: a pixel 100 px lower is 5 m further south.
+    expect(backdropToSite(b, 100, 200)).toEqual([5, 0]);
+    expect(backdropCorners(b)).toEqual([[0, 10], [20, 10], [20, 0], [0, 0]]);
+    // Turned 90° clockwise on the plan: the image's rightward x now points south.
+    const [x, y] = backdropToSite({ ...b, rotationDeg: 90 }, 300, 100);
+    expect(x).toBeCloseTo(5, 9);
+    expect(y).toBeCloseTo(-5, 9);
   });
 });

@@ -68,3 +68,26 @@ export function scaleBarMetres(frame: PlanFrame) {
   const unit = [5, 2, 1].find((m) => m * power <= target) ?? 1;
   return unit * power;
 }
+
+/** A roof drawing's placement: two image pixels a known distance apart, where the first lands, and a clockwise turn. */
+export type BackdropPlacementLike = { widthPx: number; heightPx: number; p1: XY; p2: XY; distanceM: number; originX: number; originY: number; rotationDeg: number };
+
+/**
+ * Where an image pixel (u right, v down) lies on the site: scaled by distanceM over the pixel
+ * distance p1–p2, turned clockwise (as seen on the plan) by rotationDeg about p1, and moved so p1
+ * lands on (originX, originY). A similarity transform; common practice, no source.
+ */
+export function backdropToSite(b: BackdropPlacementLike, u: number, v: number): XY {
+  const metresPerPixel = b.distanceM / (Math.hypot(b.p2[0] - b.p1[0], b.p2[1] - b.p1[1]) || 1);
+  const dx = (u - b.p1[0]) * metresPerPixel;
+  const dy = (v - b.p1[1]) * metresPerPixel; // downwards on screen
+  const turn = (b.rotationDeg * Math.PI) / 180;
+  const rx = dx * Math.cos(turn) - dy * Math.sin(turn);
+  const ry = dx * Math.sin(turn) + dy * Math.cos(turn);
+  return [b.originX + rx, b.originY - ry];
+}
+
+/** The four corners of the placed drawing in site metres, so the plan's frame can hold it. */
+export function backdropCorners(b: BackdropPlacementLike): XY[] {
+  return [[0, 0], [b.widthPx, 0], [b.widthPx, b.heightPx], [0, b.heightPx]].map(([u, v]) => backdropToSite(b, u, v));
+}

@@ -2,8 +2,8 @@
 // drawing underneath, a metre grid, north arrow and scale bar. Other features draw their own
 // layers on top through `children(frame)` (emitters, readings, exposure) in site metres via
 // frame.toPx. Clicks report site coordinates, so a polygon can be drawn on the plan.
-import { useId, useMemo, useRef, type MouseEvent, type ReactNode } from "react";
-import { boundsOf, makeFrame, scaleBarMetres, type PlanFrame, type XY } from "./plan-frame";
+import { useEffect, useId, useMemo, useRef, useState, type MouseEvent, type ReactNode } from "react";
+import { backdropCorners, boundsOf, makeFrame, scaleBarMetres, type Bounds, type PlanFrame, type XY } from "./plan-frame";
 
 export type PlanSurface = { id: string; name: string; kind: "area" | "facade"; polygon?: XY[] | null; line?: [XY, XY] | null; elevationM?: number | null; bottomM?: number | null; topM?: number | null; access: "public" | "workers" | "none" };
 export type PlanObstruction = { id: string; name: string; polygon: XY[]; heightM: number };
@@ -21,14 +21,20 @@ type Props = {
   highlightId?: string | null;
   /** A polygon being drawn, open at its end. */
   draft?: XY[];
-  onSiteClick?: (site: XY) => void;
+  /** A click on the plan, in site metres, with the frame it was drawn in (for distances in pixels). */
+  onSiteClick?: (site: XY, frame: PlanFrame) => void;
   onSiteMove?: (site: XY | null) => void;
   width?: number;
+  /** Holds the frame still (e.g. while a polygon is being drawn, so the plan does not jump under the pointer). */
+  bounds?: Bounds | null;
   children?: (frame: PlanFrame) => ReactNode;
 };
 
 /** Height of the strip under the plan that holds the scale bar and the north arrow, so they never cover the drawing. */
 const FOOTER = 40;
+
+/** A white edge round label text, so names stay legible over hatching and a roof drawing. */
+const halo = { className: "stroke-white [paint-order:stroke] [stroke-linejoin:round]", strokeWidth: 3 } as const;
 
 const fills = { public: "url(#plan-public)", workers: "url(#plan-workers)", none: "url(#plan-none)" } as const;
 
@@ -41,8 +47,24 @@ export function backdropTransform(b: PlanBackdrop, frame: PlanFrame) {
   return `translate(${ox} ${oy}) rotate(${b.rotationDeg}) scale(${k}) translate(${-b.p1[0]} ${-b.p1[1]})`;
 }
 
-export function SitePlan({ title, surfaces, obstructions = [], accessPoints = [], backdrop, extraPoints = [], highlightId, draft, onSiteClick, onSiteMove, width = 960, children }: Props) {
+export function SitePlan({ title, surfaces, obstructions = [], accessPoints = [], backdrop, extraPoints = [], highlightId, draft, onSiteClick, onSiteMove, width = 960, bounds: fixedBounds, children }: Props) {
   const svgRef = useRef<SVGSVGElement>(null);
+  // Drawn at the width it is shown at (once known in the browser), so labels and markers keep
+  // their size on a phone and on a wide screen alike; `width` until then (server rendering).
+  const [shownWidth, setShownWidth] = useState<number | null>(null);
+  useEffect(() => {
+    const svg = svgRef.current;
+    if (!svg || typeof ResizeObserver === "undefined") return;
+    const measure = () => {
+      const w = Math.round(svg.clientWidth);
+      if (w > 0) setShownWidth((old) => (old !== null && Math.abs(old - w) < 2 ? old : w));
+    };
+    measure();
+    const observer = new ResizeObserver(measure);
+    observer.observe(svg);
+    return () => observer.disconnect();
+  }, []);
+  const planWidth = shownWidth ?? width;
   const titleId = useId();
   const frame = useMemo(() => {
     const points: XY[] = [...extraPoints];
@@ -53,8 +75,9 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
     for (const o of obstructions) points.push(...o.polygon);
     for (const a of accessPoints) points.push([a.x, a.y]);
     if (draft) points.push(...draft);
-    return makeFrame(boundsOf(points), { width });
-  }, [surfaces, obstructions, accessPoints, extraPoints, draft, width]);
+    if (backdrop) points.push(...backdropCorners(backdrop));
+    return makeFrame(fixedBounds ?? boundsOf(points), { width: planWidth });
+  }, [surfaces, obstructions, accessPoints, extraPoints, draft, planWidth, backdrop, fixedBounds]);
 
   const toSiteFromEvent = (event: MouseEvent<SVGSVGElement>): XY | null => {
     const svg = svgRef.current;
@@ -87,8 +110,9 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
       viewBox={`0 0 ${frame.width} ${frame.height + FOOTER}`}
       role="img"
       aria-labelledby={titleId}
+      data-bounds={`${bounds.minX} ${bounds.minY} ${bounds.maxX} ${bounds.maxY}`}
       className={`block h-auto w-full select-none rounded-sheet border border-rule bg-white ${onSiteClick ? "cursor-crosshair" : ""}`}
-      onClick={onSiteClick ? (e) => { const p = toSiteFromEvent(e); if (p) onSiteClick(p); } : undefined}
+      onClick={onSiteClick ? (e) => { const p = toSiteFromEvent(e); if (p) onSiteClick(p, frame); } : undefined}
       onMouseMove={onSiteMove ? (e) => onSiteMove(toSiteFromEvent(e)) : undefined}
       onMouseLeave={onSiteMove ? () => onSiteMove(null) : undefined}
     >
@@ -125,7 +149,7 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
         ) : s.kind === "facade" && s.line ? (
           <g key={s.id}>
             <path d={path(s.line, false)} className={s.id === highlightId ? "stroke-ink-900" : "stroke-ink-700"} strokeWidth={5} strokeLinecap="butt" />
-            <FacadeLabel frame={frame} line={s.line} text={`${s.name} (facade)`} />
+            <FacadeLabel frame={frame} line={s.line} name={s.name} />
           </g>
         ) : null,
       )}
@@ -133,7 +157,7 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
         o.polygon.length >= 3 ? (
           <g key={o.id}>
             <path d={path(o.polygon)} fill="url(#plan-solid)" className="stroke-graphite-600" strokeWidth={1.25} />
-            <text {...labelAt(frame, ...centroid(o.polygon))} className="fill-ink-900 text-[10px]" textAnchor="middle">
+            <text {...labelAt(frame, ...centroid(o.polygon))} className={`fill-ink-900 text-[10px] ${halo.className}`} strokeWidth={halo.strokeWidth} textAnchor="middle">
               {o.name} · {o.heightM} m
             </text>
           </g>
@@ -147,7 +171,7 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
             <text y={4} textAnchor="middle" className="fill-ink-900 text-[9px] font-semibold">
               {a.kind.slice(0, 1).toUpperCase()}
             </text>
-            <text x={9} y={4} className="fill-ink-700 text-[10px]">
+            <text x={9} y={4} className={`fill-ink-700 text-[10px] ${halo.className}`} strokeWidth={halo.strokeWidth}>
               {a.name}
             </text>
           </g>
@@ -188,7 +212,7 @@ function AreaLabel({ frame, surface }: { frame: PlanFrame; surface: PlanSurface 
   const { x, y } = labelAt(frame, cx, cy);
   const elevation = surface.elevationM ?? 0;
   return (
-    <text x={x} y={y} textAnchor="middle" className="pointer-events-none fill-ink-900 text-[11px]">
+    <text x={x} y={y} textAnchor="middle" className={`pointer-events-none fill-ink-900 text-[11px] ${halo.className}`} strokeWidth={halo.strokeWidth}>
       <tspan x={x}>{surface.name}</tspan>
       <tspan x={x} dy={13} className="fill-graphite-600 text-[10px]">
         {elevation >= 0 ? "+" : "−"}
@@ -199,15 +223,23 @@ function AreaLabel({ frame, surface }: { frame: PlanFrame; surface: PlanSurface 
 }
 
 /** The facade's name along its segment, upright whichever way the segment runs. */
-function FacadeLabel({ frame, line, text }: { frame: PlanFrame; line: [XY, XY]; text: string }) {
+function FacadeLabel({ frame, line, name }: { frame: PlanFrame; line: [XY, XY]; name: string }) {
   const [a, b] = line.map((p) => frame.toPx(...p));
+  // As much of "name (facade)" as fits along the segment (about 6 px a character at 11 px).
+  const room = Math.max(6, Math.floor(Math.hypot(b[0] - a[0], b[1] - a[1]) / 6));
+  const full = `${name} (facade)`;
+  const text = full.length <= room ? full : name.length <= room ? name : `${name.slice(0, room - 1)}…`;
   let angle = (Math.atan2(b[1] - a[1], b[0] - a[0]) * 180) / Math.PI;
   if (angle > 90) angle -= 180;
   if (angle < -90) angle += 180;
   const x = (a[0] + b[0]) / 2;
   const y = (a[1] + b[1]) / 2;
+  // The label sits on the side of the segment towards the middle of the plan, so it is not cut off at an edge.
+  const turn = (angle * Math.PI) / 180;
+  const towardsMiddle = Math.sin(turn) * (frame.width / 2 - x) - Math.cos(turn) * (frame.height / 2 - y) >= 0;
   return (
-    <text transform={`translate(${x} ${y}) rotate(${angle})`} y={-8} textAnchor="middle" className="fill-ink-700 text-[11px]">
+    <text transform={`translate(${x} ${y}) rotate(${angle})`} y={towardsMiddle ? -8 : 16} textAnchor="middle" className={`fill-ink-700 text-[11px] ${halo.className}`} strokeWidth={halo.strokeWidth}>
+      <title>{full}</title>
       {text}
     </text>
   );

@@ -2,7 +2,7 @@ import { Form, Link } from "react-router";
 import { PageHeader } from "~/components/panels";
 import { requireMember } from "~/features/auth/guard.server";
 import { HistoryList } from "~/features/history/history-list";
-import { historyActors, organizationHistory } from "~/features/history/history.server";
+import { historyActors, organizationHistory, referencedNames } from "~/features/history/history.server";
 import { readPaging } from "~/lib/paging";
 import type { Route } from "./+types/organization";
 
@@ -40,11 +40,12 @@ export async function loader({ request, context }: Route.LoaderArgs) {
     organizationHistory(member.organizationId, { entity, actorUserId: actor, from: dateParam(from), to: dateParam(to, true), page, pageSize }),
     historyActors(member.organizationId),
   ]);
-  return { events, total, page, pageSize, actors, filter: { entity, actor, from: dateParam(from) ? from : "", to: dateParam(to) ? to : "" } };
+  const names = await referencedNames(member.organizationId, events);
+  return { events, names, total, page, pageSize, actors, filter: { entity, actor, from: dateParam(from) ? from : "", to: dateParam(to) ? to : "" } };
 }
 
 export default function OrganizationHistory({ loaderData }: Route.ComponentProps) {
-  const { events, total, page, pageSize, actors, filter } = loaderData;
+  const { events, names, total, page, pageSize, actors, filter } = loaderData;
   const pages = Math.max(1, Math.ceil(total / pageSize));
   const link = (p: number) => `?${new URLSearchParams({ ...Object.fromEntries(Object.entries(filter).filter(([, v]) => v)), page: String(p) } as Record<string, string>)}`;
   return (
@@ -87,6 +88,7 @@ export default function OrganizationHistory({ loaderData }: Route.ComponentProps
       </Form>
       <HistoryList
         events={events}
+        names={names}
         empty="Nothing matches these filters."
         context={(e) =>
           e.siteId ? (

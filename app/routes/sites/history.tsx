@@ -1,6 +1,6 @@
 import { requireMember } from "~/features/auth/guard.server";
 import { HistoryList } from "~/features/history/history-list";
-import { siteHistory } from "~/features/history/history.server";
+import { referencedNames, siteHistory } from "~/features/history/history.server";
 import { scopeOf } from "~/features/sites/scope.server";
 import { findSite } from "~/features/sites/sites.server";
 import { found } from "~/lib/responses.server";
@@ -10,7 +10,8 @@ import type { Route } from "./+types/history";
 export async function loader({ request, params, context }: Route.LoaderArgs) {
   const member = await requireMember({ request, context }, { roles: staffRoles });
   const site = found(await findSite(scopeOf(member), params.siteId), "No such site in your organisation.");
-  return { events: await siteHistory(member.organizationId, site.id) };
+  const events = await siteHistory(member.organizationId, site.id);
+  return { events, names: await referencedNames(member.organizationId, events) };
 }
 
 export default function SiteHistory({ loaderData }: Route.ComponentProps) {
@@ -20,7 +21,7 @@ export default function SiteHistory({ loaderData }: Route.ComponentProps) {
         History
       </h2>
       <p className="mb-4 text-sm text-graphite-600">Every change to this site's details, layout, emitters, visits and readings, newest first.</p>
-      <HistoryList events={loaderData.events} empty="No changes recorded yet." />
+      <HistoryList events={loaderData.events} names={loaderData.names} empty="No changes recorded yet." />
     </section>
   );
 }

@@ -1,4 +1,4 @@
-import { Link, NavLink, Outlet } from "react-router";
+import { Link, NavLink, Outlet, useLocation } from "react-router";
 import { requireMember } from "~/features/auth/guard.server";
 import { siteKindLabels, type SiteKind } from "~/features/sites/kinds";
 import { scopeOf } from "~/features/sites/scope.server";
@@ -18,15 +18,17 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   };
 }
 
-const sections = [
-  { to: "", label: "Layout", end: true },
+const sections: { to: string; label: string; end?: boolean; also?: string }[] = [
+  { to: "", label: "Layout", end: true, also: "layout" },
   { to: "emitters", label: "Emitters" },
   { to: "visits", label: "Visits" },
+  { to: "assessments", label: "Assessments" },
   { to: "history", label: "History" },
 ];
 
 export default function SitePage({ loaderData }: Route.ComponentProps) {
   const { site, canEdit } = loaderData;
+  const { pathname } = useLocation();
   const place = [site.address, site.city].filter(Boolean).join(", ");
   return (
     <>
@@ -66,7 +68,7 @@ export default function SitePage({ loaderData }: Route.ComponentProps) {
               to={s.to ? `/sites/${site.id}/${s.to}` : `/sites/${site.id}`}
               end={s.end}
               className={({ isActive }) =>
-                `-mb-px whitespace-nowrap border-b-2 px-3 py-2 text-sm ${isActive ? "border-ink-900 font-medium text-ink-900" : "border-transparent text-graphite-600 hover:text-ink-900"}`
+                `-mb-px whitespace-nowrap border-b-2 px-3 py-2 text-sm ${isActive || (s.also && pathname === `/sites/${site.id}/${s.also}`) ? "border-ink-900 font-medium text-ink-900" : "border-transparent text-graphite-600 hover:text-ink-900"}`
               }
             >
               {s.label}

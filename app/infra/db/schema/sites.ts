@@ -23,6 +23,8 @@ export const site = pgTable(
     longitude: doublePrecision("longitude"),
     datumNote: text("datum_note").notNull().default(""),
     accessNotes: text("access_notes").notNull().default(""),
+    /** Kept by a trigger on emitter (migration 0004_site_emitter_count), for lists sorted by it. */
+    emitterCount: integer("emitter_count").notNull().default(0),
     version: version(),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
@@ -30,6 +32,7 @@ export const site = pgTable(
   (t) => [
     index("site_org_name_idx").on(t.organizationId, t.name),
     index("site_org_updated_idx").on(t.organizationId, t.updatedAt),
+    index("site_org_emitters_idx").on(t.organizationId, t.emitterCount),
     index("site_client_idx").on(t.clientId),
   ],
 );
