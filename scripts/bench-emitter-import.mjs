@@ -51,7 +51,7 @@ try {
     t0 = performance.now();
     const result = await importEmitters(who, site, bytes, { mode: "replace" });
     times.push(performance.now() - t0);
-    console.log(`  import run ${run} (feature function, replace, one transaction): ${times.at(-1).toFixed(0)} ms, ${result.emitters.length} stored, ${result.deleted} replaced`);
+    console.log(`  import run ${run} (feature function, replace, one transaction): ${times.at(-1).toFixed(0)} ms, ${result.count} stored, ${result.deleted} replaced`);
   }
   times.sort((a, b) => a - b);
   console.log(`  median of 3: ${times[1].toFixed(0)} ms`);
@@ -69,7 +69,7 @@ try {
     t0 = performance.now();
     const response = await fetch(`${base}/api/v1/sites/${site}/emitters/csv?mode=replace`, { method: "POST", body: bytes, headers: { cookie, origin: base, "content-type": "text/csv" } });
     const answer = await response.json();
-    console.log(`  over HTTP (POST ${base}/api/v1/sites/:id/emitters/csv?mode=replace): ${ms(t0)} ms, status ${response.status}, ${answer.emitters?.length ?? 0} stored`);
+    console.log(`  over HTTP (POST ${base}/api/v1/sites/:id/emitters/csv?mode=replace): ${ms(t0)} ms, status ${response.status}, ${answer.count ?? 0} stored`);
   } else {
     console.log("  over HTTP: skipped (start with WITH_APP=1 to measure it)");
   }

@@ -1,6 +1,7 @@
 // An engineer imports a site's emitters from CSV (a file with one bad row first: the report names
 // row, column and reason; then the fixed file), edits a row inline (dBd and dBm kept as typed, EIRP
 // recomputed), sees the emitters on the plan and exports them.
+import AxeBuilder from "@axe-core/playwright";
 import { expect, test } from "@playwright/test";
 import { checkBadEmitterCsv, importFixedEmitterCsv } from "./emitters-helpers";
 import { shot, signIn, visit } from "./helpers";
@@ -58,3 +59,42 @@ test("an engineer imports emitters from CSV, fixes the file after the report, an
   expect(readFileSync(file, "utf8")).toContain("E1,Harbour Mobile,LTE 800,806,,49,2,1.2,,15.85,,3gpp-38.901");
   await shot(page, info, "04-done");
 });
+
+for (const viewport of [{ width: 1280, height: 800 }, { width: 390, height: 844 }]) {
+  test(`the Emitters section and the pattern library at ${viewport.width} px: no sideways overflow, no serious axe finding`, async ({ browser }, info) => {
+    const page = await (await browser.newContext({ viewport })).newPage();
+    await signIn(page, "engineer@demo.isotrope.test");
+    const { sites } = (await (await page.request.get("/api/v1/sites?pageSize=50")).json()) as { sites: { id: string; emitterCount: number }[] };
+    const rooftop = sites.sort((a, b) => b.emitterCount - a.emitterCount)[0];
+    const look = async (name: string) => {
+      await expect(page.getByRole("heading", { level: 1 }).first()).toBeVisible();
+      const overflow = await page.evaluate(() => document.scrollingElement!.scrollWidth - window.innerWidth);
+      expect.soft(overflow, `${name}: wider than the window`).toBeLessThanOrEqual(0);
+      const axe = await new AxeBuilder({ page }).analyze();
+      expect.soft(axe.violations.filter((v) => v.impact === "serious" || v.impact === "critical").map((v) => `${v.id}: ${v.help}`), name).toEqual([]);
+      await shot(page, info, `${viewport.width}-${name}`);
+    };
+    await visit(page, `/sites/${rooftop.id}/emitters`);
+    await expect(page.getByRole("table", { name: "Emitters of this site, with EIRP and ERP" }).getByRole("row")).toHaveCount(rooftop.emitterCount + 1);
+    await look("emitters");
+    await visit(page, `/sites/${rooftop.id}`);
+    await expect(page.getByRole("list", { name: "Operators on the plan" })).toBeVisible();
+    await look("layout-with-emitters");
+    await visit(page, "/patterns");
+    await look("patterns");
+    if (viewport.width === 1280) {
+      // A parametric pattern, previewed as two polar diagrams before saving.
+      const name = `Reference 3GPP 90/10 ${Date.now().toString(36)}`;
+      await page.getByLabel("Name").fill(name);
+      await page.getByLabel("Pattern", { exact: true }).selectOption("3gpp-38.901");
+      await page.getByLabel("Horizontal beamwidth (°)").fill("90");
+      await page.getByLabel("Vertical beamwidth (°)").fill("10");
+      await expect(page.getByText("Preview (nothing saved yet): half-power beamwidths 90.0° horizontal, 10.0° vertical")).toBeVisible();
+      await expect(page.getByRole("img", { name: /^Preview: horizontal cut/ })).toBeVisible();
+      await page.getByRole("button", { name: "Save to the library" }).click();
+      await expect(page.getByText(`“${name}” is in the library.`)).toBeVisible();
+      await expect(page.getByRole("heading", { name, level: 3 })).toBeVisible();
+    }
+    await page.context().close();
+  });
+}

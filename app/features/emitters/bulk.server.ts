@@ -2,7 +2,7 @@
 // replaced; rows that keep their id are updated) and the CSV import (replace or append; all
 // rows, or only the valid ones when asked). Inserts and audit rows travel as one JSON parameter.
 import { randomUUID } from "node:crypto";
-import { and, asc, count, eq, getTableColumns, gte, inArray, sql } from "drizzle-orm";
+import { and, asc, eq, getTableColumns, inArray, sql } from "drizzle-orm";
 import { lockSite, touchSite } from "~/features/sites/sites.server";
 import { db, schema, type Tx } from "~/infra/db.server";
 import { auditChanges, type RecordChange } from "~/lib/audit.server";
@@ -37,8 +37,11 @@ export class EmittersRefused extends DomainError {
   }
 }
 
-/** Inserts the emitters at the given positions in one statement (no rows come back). */
-async function insertEmitters(tx: Tx, organizationId: string, siteId: string, positions: number[], list: EmitterValues[]) {
+/**
+ * Inserts the emitters at the given positions in one statement (no rows come back). With `audit`,
+ * the same statement writes each new row's "emitter.created" audit row from what was inserted.
+ */
+async function insertEmitters(tx: Tx, organizationId: string, siteId: string, positions: number[], list: EmitterValues[], audit?: Who) {
   if (list.length === 0) return [];
   const records = list.map((e, i) => ({
     id: randomUUID(), position: positions[i], label: e.label, operator: e.operator, band: e.band, frequency_mhz: e.frequencyMHz,
@@ -47,7 +50,7 @@ async function insertEmitters(tx: Tx, organizationId: string, siteId: string, po
     mechanical_tilt_deg: e.mechanicalTiltDeg, electrical_tilt_deg: e.electricalTiltDeg, x: e.x, y: e.y, z: e.z, model: e.model, aperture_m: e.apertureM,
     dish_diameter_m: e.dishDiameterM, duty_factor: e.dutyFactor, actual_max_factor: e.actualMaxFactor, tdd_factor: e.tddFactor, active: e.active, notes: e.notes,
   }));
-  await tx.execute(sql`
+  const insert = sql`
     insert into emitter (id, organization_id, site_id, position, label, operator, band, frequency_mhz, power_per_carrier_w, power_unit, carriers, loss_db, gain_dbi, gain_unit,
       pattern_id, pattern, h_beamwidth_deg, v_beamwidth_deg, azimuth_deg, mechanical_tilt_deg, electrical_tilt_deg, x, y, z, model, aperture_m, dish_diameter_m,
       duty_factor, actual_max_factor, tdd_factor, active, notes)
@@ -57,7 +60,13 @@ async function insertEmitters(tx: Tx, organizationId: string, siteId: string, po
     from jsonb_to_recordset(${JSON.stringify(records)}::jsonb) as r(id text, position int, label text, operator text, band text, frequency_mhz float8, power_per_carrier_w float8,
       power_unit text, carriers int, loss_db float8, gain_dbi float8, gain_unit text, pattern_id text, pattern jsonb, h_beamwidth_deg float8, v_beamwidth_deg float8,
       azimuth_deg float8, mechanical_tilt_deg float8, electrical_tilt_deg float8, x float8, y float8, z float8, model text, aperture_m float8, dish_diameter_m float8,
-      duty_factor float8, actual_max_factor float8, tdd_factor float8, active boolean, notes text)`);
+      duty_factor float8, actual_max_factor float8, tdd_factor float8, active boolean, notes text)`;
+  if (audit) {
+    await tx.execute(sql`
+      with e as (${insert} returning *)
+      insert into audit_event (organization_id, actor_user_id, action, subject_type, subject_id, site_id, before, after)
+      select ${audit.organizationId}, ${audit.userId}, 'emitter.created', 'emitter', e.id, e.site_id, null, ${snapshotSql} from e`);
+  } else await tx.execute(insert);
   return records.map((r) => r.id);
 }
 
@@ -81,13 +90,13 @@ const snapshotSql = sql.raw(
     .join(", ")})`,
 );
 
-/** One audit row per emitter of the site (from `fromPosition` on), as created or as deleted, in one statement. */
-async function auditSiteRows(tx: Tx, who: Who, siteId: string, kind: "created" | "deleted", fromPosition = 0) {
-  const [before, after] = kind === "created" ? [sql`null`, snapshotSql] : [snapshotSql, sql`null`];
-  await tx.execute(sql`
+/** Deletes every emitter of the site and writes each one's "emitter.deleted" audit row, in one statement; returns how many went. */
+async function deleteAllAudited(tx: Tx, who: Who, siteId: string) {
+  const result = await tx.execute(sql`
+    with e as (delete from emitter where site_id = ${siteId} returning *)
     insert into audit_event (organization_id, actor_user_id, action, subject_type, subject_id, site_id, before, after)
-    select ${who.organizationId}, ${who.userId}, ${`emitter.${kind}`}, 'emitter', e.id, e.site_id, ${before}, ${after}
-    from emitter e where e.site_id = ${siteId} and e.position >= ${fromPosition}`);
+    select ${who.organizationId}, ${who.userId}, 'emitter.deleted', 'emitter', e.id, e.site_id, ${snapshotSql}, null from e`);
+  return (result as unknown as { count: number }).count;
 }
 
 const created = (siteId: string) => (row: typeof emitter.$inferSelect): RecordChange => ({ action: "emitter.created", entity: "emitter", entityId: row.id, siteId, before: null, after: snapshot(row) });
@@ -172,25 +181,15 @@ export async function importEmitters(who: Who, siteId: string, bytes: Uint8Array
   }
   if (valid.length === 0) throw refuse("There is no valid emitter in the file to store.");
   const values = valid.map((v) => valuesFromInput(v.emitter));
-  if (options.dryRun) return { emitters: values, skipped: problems, deleted: 0, encoding: checked.encoding, stored: false as const };
+  if (options.dryRun) return { emitters: values, count: values.length, skipped: problems, deleted: 0, encoding: checked.encoding, stored: false as const };
   return db.transaction(async (tx) => {
     await lockSite(tx, who, siteId);
-    let deleted = 0;
-    if (options.mode === "replace") {
-      [{ n: deleted }] = await tx.select({ n: count() }).from(emitter).where(eq(emitter.siteId, siteId));
-      await auditSiteRows(tx, who, siteId, "deleted");
-      t("audit deletes");
-      await tx.delete(emitter).where(eq(emitter.siteId, siteId));
-      t("delete");
-    }
+    const deleted = options.mode === "replace" ? await deleteAllAudited(tx, who, siteId) : 0;
+    t("delete with audit rows");
     const [{ next }] = await tx.select({ next: sql<number>`coalesce(max(${emitter.position}) + 1, 0)::int` }).from(emitter).where(eq(emitter.siteId, siteId));
-    await insertEmitters(tx, who.organizationId, siteId, values.map((_, i) => next + i), values);
-    t("insert");
-    await auditSiteRows(tx, who, siteId, "created", next);
-    t("audit inserts");
+    await insertEmitters(tx, who.organizationId, siteId, values.map((_, i) => next + i), values, who);
+    t("insert with audit rows");
     await touchSite(tx, siteId);
-    const rows = await tx.select().from(emitter).where(and(eq(emitter.siteId, siteId), gte(emitter.position, next))).orderBy(asc(emitter.position));
-    t("select back");
-    return { emitters: rows, skipped: problems, deleted, encoding: checked.encoding, stored: true as const };
+    return { count: values.length, skipped: problems, deleted, encoding: checked.encoding, stored: true as const };
   });
 }

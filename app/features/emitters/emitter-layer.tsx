@@ -11,10 +11,14 @@ const opName = (o: string) => o.trim() || "—";
 
 export function EmitterLayer({ frame, emitters, highlightId }: { frame: PlanFrame; emitters: PlanEmitter[]; highlightId?: string | null }) {
   const colours = operatorColours(emitters.map((e) => e.operator));
+  const placed: [number, number][] = [];
   return (
     <g aria-label="Emitters">
       {emitters.map((e) => {
         const [px, py] = frame.toPx(e.x, e.y);
+        // Emitters mounted together (within 24 px on the plan) stack their labels instead of printing over each other.
+        const crowd = placed.filter(([qx, qy]) => Math.hypot(qx - px, qy - py) < 24).length;
+        placed.push([px, py]);
         const i = colours.get(opName(e.operator)) ?? 0;
         const a = (e.azimuthDeg * Math.PI) / 180;
         const [dx, dy] = [Math.sin(a), -Math.cos(a)];
@@ -34,7 +38,7 @@ export function EmitterLayer({ frame, emitters, highlightId }: { frame: PlanFram
             <text y={3} textAnchor="middle" fontSize={8} fontWeight={700} fill={ink}>
               {initials(e.operator)}
             </text>
-            <text x={dx > 0.3 ? -r - 3 : r + 3} y={dy > 0.3 ? -r : r + 8} textAnchor={dx > 0.3 ? "end" : "start"} fontSize={10} fontWeight={600} className="fill-ink-900" paintOrder="stroke" stroke="#ffffff" strokeWidth={3}>
+            <text x={dx > 0.3 ? -r - 3 : r + 3} y={(dy > 0.3 ? -r : r + 8) + (dy > 0.3 ? -11 : 11) * crowd} textAnchor={dx > 0.3 ? "end" : "start"} fontSize={10} fontWeight={600} className="fill-ink-900" paintOrder="stroke" stroke="#ffffff" strokeWidth={3}>
               {e.label}
             </text>
           </g>

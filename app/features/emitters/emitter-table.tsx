@@ -131,7 +131,7 @@ export function EmitterTable({
           const i = colours.get(c.row.original.operator.trim() || "—") ?? 0;
           return (
             <span
-              className="inline-flex max-w-32 items-center gap-1.5"
+              className="inline-flex max-w-28 items-center max-md:max-w-none gap-1.5"
               title={c.row.original.operator}
             >
               <svg
@@ -159,7 +159,7 @@ export function EmitterTable({
         header: "Band",
         accessorKey: "band",
         cell: (c) => (
-          <span className="block max-w-24 truncate" title={c.row.original.band}>
+          <span className="block max-w-20 truncate max-md:max-w-none" title={c.row.original.band}>
             {c.row.original.band || "—"}
           </span>
         ),
@@ -202,6 +202,22 @@ export function EmitterTable({
           const r = c.row.original;
           return `${tidy(gainFromDbi(r.gainDbi, r.gainUnit))} ${r.gainUnit}`;
         },
+      },
+      {
+        id: "eirp",
+        header: "EIRP",
+        accessorKey: "eirpW",
+        cell: (c) => (
+          <span className="font-semibold">
+            {formatWatts(c.row.original.eirpW)}
+          </span>
+        ),
+      },
+      {
+        id: "erp",
+        header: "ERP",
+        accessorKey: "erpW",
+        cell: (c) => formatWatts(c.row.original.erpW),
       },
       {
         id: "pattern",
@@ -275,22 +291,6 @@ export function EmitterTable({
           );
         },
       },
-      {
-        id: "eirp",
-        header: "EIRP",
-        accessorKey: "eirpW",
-        cell: (c) => (
-          <span className="font-semibold">
-            {formatWatts(c.row.original.eirpW)}
-          </span>
-        ),
-      },
-      {
-        id: "erp",
-        header: "ERP",
-        accessorKey: "erpW",
-        cell: (c) => formatWatts(c.row.original.erpW),
-      },
     ],
     [names, colours],
   );
@@ -305,7 +305,7 @@ export function EmitterTable({
   });
   const span = columns.length + (canEdit ? 1 : 0);
   return (
-    <div className="max-w-full overflow-x-auto rounded-sheet border border-rule bg-sheet">
+    <div className="relative max-w-full overflow-x-auto rounded-sheet border border-rule bg-sheet">
       <table className="table-stack min-w-full text-sm md:text-[13px]">
         <caption className="sr-only">
           Emitters of this site, with EIRP and ERP
@@ -326,7 +326,7 @@ export function EmitterTable({
                           ? "descending"
                           : undefined
                     }
-                    className="label-caps px-1.5 py-2 text-left font-medium whitespace-nowrap"
+                    className={`label-caps px-1.5 py-2 text-left font-medium whitespace-nowrap ${h.column.id === "label" ? "md:sticky md:left-0 md:z-10 md:bg-sheet" : ""}`}
                   >
                     <button
                       type="button"
@@ -359,7 +359,7 @@ export function EmitterTable({
                   <td
                     key={cell.id}
                     data-label={String(cell.column.columnDef.header)}
-                    className={`px-1.5 py-1.5 whitespace-nowrap text-ink-900 tabular-nums max-md:whitespace-normal ${phoneHidden.has(cell.column.id) ? "max-md:hidden" : ""}`}
+                    className={`px-1.5 py-1.5 whitespace-nowrap text-ink-900 tabular-nums max-md:whitespace-normal ${phoneHidden.has(cell.column.id) ? "max-md:hidden!" : ""} ${cell.column.id === "label" ? "md:sticky md:left-0 md:z-10 md:bg-sheet" : ""}`}
                   >
                     {flexRender(cell.column.columnDef.cell, cell.getContext())}
                   </td>

@@ -9,7 +9,7 @@ import { EMITTER_CSV_COLUMNS } from "./csv-columns";
 import { formatWatts } from "./format";
 
 type Problem = { row: number | null; column: string | null; message: string };
-type Answer = { stored?: boolean; emitters?: EmitterValues[]; skipped?: Problem[]; deleted?: number; encoding?: string; error?: { message: string }; problems?: Problem[]; validCount?: number };
+type Answer = { stored?: boolean; count?: number; emitters?: EmitterValues[]; skipped?: Problem[]; deleted?: number; encoding?: string; error?: { message: string }; problems?: Problem[]; validCount?: number };
 type State =
   | { kind: "idle" }
   | { kind: "preview"; emitters: EmitterValues[]; problems: Problem[]; encoding?: string; message?: string }
@@ -61,8 +61,8 @@ export function ImportPanel({ siteId, count }: { siteId: string; count: number }
     const { status, answer } = await send(siteId, file, { mode, ...(step === "check" ? { dryRun: "true", validOnly: "true" } : {}), ...(step === "valid" ? { validOnly: "true" } : {}) });
     setBusy(false);
     if (status === 200 && answer.emitters) return setState({ kind: "preview", emitters: answer.emitters, problems: answer.skipped ?? [], encoding: answer.encoding });
-    if (status === 201 && answer.emitters) {
-      setState({ kind: "stored", count: answer.emitters.length, deleted: answer.deleted ?? 0, skipped: answer.skipped?.length ?? 0 });
+    if (status === 201 && answer.stored) {
+      setState({ kind: "stored", count: answer.count ?? 0, deleted: answer.deleted ?? 0, skipped: answer.skipped?.length ?? 0 });
       if (input.current) input.current.value = "";
       return revalidator.revalidate();
     }

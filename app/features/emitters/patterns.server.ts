@@ -36,7 +36,7 @@ export async function createPattern(who: Actor, input: PatternInput) {
       .insert(antennaPattern)
       .values({ ...input, organizationId: who.organizationId, kind: spec.type, pattern: spec, hBeamwidthDeg: beam(cuts.hBeamwidthDeg), vBeamwidthDeg: beam(cuts.vBeamwidthDeg) })
       .returning();
-    await auditChange(tx, who, { action: "pattern.created", entity: "antenna_pattern", entityId: row.id, before: null, after: { ...snapshot(row), pattern: { type: spec.type } } });
+    await auditChange(tx, who, { action: "pattern.created", entity: "pattern", entityId: row.id, before: null, after: { ...snapshot(row), pattern: { type: spec.type } } });
     return row;
   });
 }
@@ -56,7 +56,7 @@ export async function deletePattern(who: Actor, patternId: string) {
       throw new DomainError(`“${row.name}” is in use on ${users.length === 1 ? "the site" : `${users.length} sites`} ${names}. Give those emitters another pattern first.`, 409, undefined, { sites: users });
     }
     await tx.delete(antennaPattern).where(eq(antennaPattern.id, patternId));
-    await auditChange(tx, who, { action: "pattern.deleted", entity: "antenna_pattern", entityId: patternId, before: { ...snapshot(row), pattern: { type: row.kind } }, after: null });
+    await auditChange(tx, who, { action: "pattern.deleted", entity: "pattern", entityId: patternId, before: { ...snapshot(row), pattern: { type: row.kind } }, after: null });
     return row;
   });
 }

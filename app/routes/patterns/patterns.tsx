@@ -1,4 +1,4 @@
-import { useMemo } from "react";
+import { useMemo, useState } from "react";
 import { data, Link, useFetcher } from "react-router";
 import { Button } from "~/components/button";
 import { Card, EmptyState, PageHeader } from "~/components/panels";
@@ -43,14 +43,26 @@ function kindLabel(kind: string) {
 
 function DeletePattern({ pattern }: { pattern: PatternView }) {
   const fetcher = useFetcher<typeof action>();
+  const [asking, setAsking] = useState(false);
   const answer = fetcher.state === "idle" ? fetcher.data : undefined;
+  if (!asking)
+    return (
+      <Button size="sm" tone="secondary" onClick={() => setAsking(true)} aria-label={`Delete pattern ${pattern.name}`}>
+        Delete…
+      </Button>
+    );
   return (
-    <fetcher.Form method="post" className="space-y-2">
+    <fetcher.Form method="post" className="max-w-sm space-y-2">
       <input type="hidden" name="intent" value="delete-pattern" />
       <input type="hidden" name="id" value={pattern.id} />
-      <Button size="sm" tone="danger" disabled={fetcher.state !== "idle"} aria-label={`Delete pattern ${pattern.name}`}>
-        Delete
-      </Button>
+      <div className="flex gap-2">
+        <Button size="sm" tone="danger" disabled={fetcher.state !== "idle"}>
+          Delete {pattern.uses ? "(in use)" : "it"}
+        </Button>
+        <Button size="sm" type="button" tone="quiet" onClick={() => setAsking(false)}>
+          Keep
+        </Button>
+      </div>
       {answer && !answer.ok ? (
         <div role="alert" className="text-sm text-danger-700">
           <p>{answer.message}</p>

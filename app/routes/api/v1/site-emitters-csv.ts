@@ -1,11 +1,10 @@
 // GET /api/v1/sites/:id/emitters/csv → the site's emitters as CSV (README.md, "Emitter CSV").
-// POST (text/csv, ≤ 5 MB) imports a file: ?mode=replace|append (default append), ?validOnly=true
+// POST (text/csv, ≤ 5 MB) imports a file → 201 { stored, count, deleted, skipped }: ?mode=replace|append (default append), ?validOnly=true
 // stores the valid rows only, ?dryRun=true checks and answers without writing (the page's preview).
 import { requireApiMember } from "~/features/auth/guard.server";
 import { refusedAnswer } from "~/features/emitters/api.server";
 import { importEmitters } from "~/features/emitters/bulk.server";
 import { exportEmittersCsv } from "~/features/emitters/export.server";
-import { emitterJson } from "~/features/emitters/json";
 import { EMITTER_CSV_MAX_BYTES } from "~/features/emitters/csv";
 import { actorOf, scopeOf } from "~/features/sites/scope.server";
 import { findSite } from "~/features/sites/sites.server";
@@ -36,8 +35,8 @@ export async function action({ request, params, context }: Route.ActionArgs) {
     const bytes = await readBodyBytes(request, EMITTER_CSV_MAX_BYTES, "The file is larger than 5 MB. Split it, and import the parts with mode=append.");
     try {
       const result = await importEmitters(who, params.siteId, bytes, { mode, validOnly: query.get("validOnly") === "true", dryRun: query.get("dryRun") === "true" });
-      const emitters = result.stored ? result.emitters.map((r) => emitterJson(r as never)) : result.emitters;
-      return Response.json({ stored: result.stored, emitters, skipped: result.skipped, deleted: result.deleted, encoding: result.encoding }, { status: result.stored ? 201 : 200 });
+      if (!result.stored) return Response.json({ stored: false, count: result.count, emitters: result.emitters, skipped: result.skipped, encoding: result.encoding });
+      return Response.json({ stored: true, count: result.count, deleted: result.deleted, skipped: result.skipped, encoding: result.encoding }, { status: 201 });
     } catch (error) {
       return refusedAnswer(error);
     }
