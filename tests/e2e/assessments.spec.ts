@@ -13,7 +13,7 @@ async function setPower(watts: number) {
   const sql = postgres(process.env.DATABASE_URL!, { max: 1, onnotice: () => {} });
   try {
     const rows = await sql`update emitter set power_per_carrier_w = ${watts}, version = version + 1
-      where label = ${EMITTER} and site_id in (select id from site where name = 'Calloway House') returning id`;
+      where label = ${EMITTER} and site_id in (select s.id from site s join member m on m.organization_id = s.organization_id join "user" u on u.id = m.user_id where s.name = 'Calloway House' and u.email = 'engineer@demo.isotrope.test') returning id`;
     expect(rows.length).toBe(1);
   } finally {
     await sql.end();

@@ -109,7 +109,7 @@ test("a replaced invitation says so, and repeated wrong passwords say how long t
     );
   await expect.poll(async () => (await mailsTo()).length, { timeout: 15_000 }).toBe(2);
   const all = await mailsTo();
-  const mails = [all.find((m) => m.text.includes("as Engineer")), all.find((m) => m.text.includes("as Reviewer"))];
+  const mails = [all.find((m) => m.text.includes("as Engineer")), all.find((m) => m.text.includes("as Reviewing engineer"))];
   expect(mails[0]).toBeDefined();
   expect(mails[1]).toBeDefined();
   await visit(page, linkIn(mails[0] as never));

@@ -1,7 +1,7 @@
 // The demo seed: one account per role in the demo consultancy, one in a second organisation,
 // and never a second run over existing data.
 import { execFileSync } from "node:child_process";
-import { eq, sql } from "drizzle-orm";
+import { and, eq, sql } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 import { evaluateSite } from "~/features/exposure/evaluate-site";
 import { loadSiteInventory } from "~/features/exposure/inventory.server";
@@ -58,7 +58,7 @@ describe("demo inventory", () => {
   });
 
   it("puts 12 or more emitters of three operators from 700 MHz to 3.7 GHz on the rooftop, one massive-MIMO with F_PR and TDD", async () => {
-    const [rooftop] = await db.select().from(schema.site).where(eq(schema.site.kind, "rooftop"));
+    const [rooftop] = await db.select().from(schema.site).where(and(eq(schema.site.kind, "rooftop"), eq(schema.site.organizationId, await demoOrgId())));
     const emitters = await db.select().from(schema.emitter).where(eq(schema.emitter.siteId, rooftop.id));
     expect(emitters.length).toBeGreaterThanOrEqual(12);
     expect(new Set(emitters.map((e) => e.operator)).size).toBe(3);
@@ -78,7 +78,7 @@ describe("demo inventory", () => {
       .innerJoin(schema.member, eq(schema.member.id, schema.clientMember.memberId))
       .innerJoin(schema.user, eq(schema.user.id, schema.member.userId))
       .where(eq(schema.user.email, "client@demo.isotrope.test"));
-    const [rooftop] = await db.select().from(schema.site).where(eq(schema.site.kind, "rooftop"));
+    const [rooftop] = await db.select().from(schema.site).where(and(eq(schema.site.kind, "rooftop"), eq(schema.site.organizationId, await demoOrgId())));
     expect(client.clientId).toBe(rooftop.clientId);
     const visits = await db.select().from(schema.visit).where(eq(schema.visit.siteId, rooftop.id));
     const readings = await db.select().from(schema.reading).where(eq(schema.reading.visitId, visits[0].id));
@@ -88,7 +88,7 @@ describe("demo inventory", () => {
   });
 
   it("has part of the rooftop's main roof above the general-population limit, averaged over 0–2 m", async () => {
-    const [rooftop] = await db.select().from(schema.site).where(eq(schema.site.kind, "rooftop"));
+    const [rooftop] = await db.select().from(schema.site).where(and(eq(schema.site.kind, "rooftop"), eq(schema.site.organizationId, await demoOrgId())));
     const inventory = await loadSiteInventory(rooftop.organizationId, rooftop.id);
     const site = evaluateSite(inventory, optionsSchema.parse({ standard: "fcc", tier: "general", gridStepM: 0.5 }));
     const main = site.surfaces.find((s) => s.name === "Main roof")!;
