@@ -8,3 +8,4 @@ export * from "./emitters";
 export * from "./visits";
 export * from "./tokens";
 export * from "./auth-throttle";
+export * from "./assessments";
