@@ -31,6 +31,9 @@ export default [
         route("visits/new", "routes/sites/visit-new.tsx"),
         route("visits/:visitId", "routes/sites/visit.tsx"),
         route("visits/:visitId/photos/:photoId", "routes/sites/photo.tsx"),
+        route("assessments", "routes/sites/assessments.tsx"),
+        route("assessments/:assessmentId", "routes/sites/assessment.tsx"),
+        route("assessments/:a/compare/:b", "routes/sites/assessment-compare.tsx"),
       ]),
     ]),
     route("history", "routes/history/organization.tsx"),
@@ -53,5 +56,8 @@ export default [
     route("v1/visits/:visitId", "routes/api/v1/visit.ts"),
     route("v1/visits/:visitId/photos", "routes/api/v1/visit-photos.ts"),
     route("v1/visits/:visitId/readings", "routes/api/v1/visit-readings.ts"),
+    route("v1/sites/:siteId/assessments", "routes/api/v1/site-assessments.ts"),
+    route("v1/assessments/:assessmentId", "routes/api/v1/assessment.ts"),
+    route("v1/assessments/:a/compare/:b", "routes/api/v1/assessment-compare.ts"),
   ]),
 ] satisfies RouteConfig;

@@ -6,6 +6,7 @@ import { siteScope, type Scope } from "~/features/sites/scope.server";
 import { db, schema } from "~/infra/db.server";
 import { auditChange, type Actor } from "~/lib/audit.server";
 import { DomainError } from "~/lib/domain-error";
+import { compareAssessments } from "./compare";
 import type { MitigationEdit, SignAdd } from "./schemas";
 
 const { assessment, site } = schema;
@@ -86,4 +87,12 @@ export function addSign(who: Actor & Scope, id: string, input: SignAdd) {
     const sign: Sign = { id: `s${next}`, category: input.category, x: input.x, y: input.y, z: 0, surfaceId: null, origin: "engineer", accessPointId: null, where: input.where, note: input.note };
     return { ...plan, signs: [...plan.signs, sign] };
   });
+}
+
+/** Two assessments of one site, both within the scope, and what changed from the first to the second. */
+export async function compareById(scope: Scope, aId: string, bId: string) {
+  const [a, b] = await Promise.all([requireAssessment(scope, aId), requireAssessment(scope, bId)]);
+  if (a.siteId !== b.siteId) throw new DomainError("Compare two assessments of the same site.", 400);
+  const side = (r: AssessmentRow) => ({ options: r.options, inventory: r.inventory, summary: r.summary, results: r.results }) as unknown as Parameters<typeof compareAssessments>[0];
+  return { a, b, comparison: compareAssessments(side(a), side(b)) };
 }

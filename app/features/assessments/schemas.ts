@@ -10,7 +10,8 @@ const name = requiredText("a name for the assessment", ASSESSMENT_NAME_MAX);
 
 /** POST /api/v1/sites/:id/assessments: `{ name, standard, tier, gridStepM, heights, mode, reflectionFactor, defaultModel? }`. */
 export const freezeApiSchema = optionsSchema.extend({ name });
-export type FreezeInput = z.output<typeof freezeApiSchema>;
+/** What freezing takes: a name and the options, any left out taking their defaults. */
+export type FreezeInput = z.input<typeof freezeApiSchema>;
 
 /** The page form sends text: the numbers are coerced, the reflection factor is one of three choices. */
 export const freezeFormSchema = z.strictObject({

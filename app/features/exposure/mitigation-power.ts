@@ -4,7 +4,7 @@
 // The 5 % figure is the FCC's shared-responsibility rule: where the limits are exceeded, every
 // transmitter producing more than 5 % of its own limit there shares the duty to bring the area
 // into compliance (47 CFR §1.1307(b), from memory; paragraph not confirmed against the eCFR text).
-import type { EmitterInput, EvaluationRequestInput, EvaluationResponse } from "~/engine";
+import type { EvaluationRequestInput, EvaluationResponse } from "~/engine";
 import { cellCentre, type GridGeometry } from "./mitigation-grid";
 
 export const POWER_DOWN_THRESHOLD_PERCENT = 5;
@@ -15,7 +15,7 @@ export type EmitterLimits = { id: string; inventoryId: string; generalWm2: numbe
 export type PowerDownEntry = { id: string; inventoryId: string; maxPercent: number };
 export type PowerDown = { general: PowerDownEntry[]; occupational: PowerDownEntry[] };
 
-type Context = { standard: EvaluationRequestInput["standard"]; tier: "general" | "occupational"; emitters: EmitterInput[]; heights: number[]; mode: "average" | "max" };
+type Context = { standard: EvaluationRequestInput["standard"]; tier: "general" | "occupational"; emitters: EvaluationRequestInput["emitters"]; heights: number[]; mode: "average" | "max" };
 
 const round6 = (v: number) => Math.round(v * 1e6) / 1e6;
 

@@ -22,6 +22,7 @@ const sections = [
   { to: "", label: "Layout", end: true },
   { to: "emitters", label: "Emitters" },
   { to: "visits", label: "Visits" },
+  { to: "assessments", label: "Assessments" },
   { to: "history", label: "History" },
 ];
 
