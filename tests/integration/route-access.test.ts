@@ -40,6 +40,7 @@ let clientId = "";
 let siteId = "";
 let visitId = "";
 let photoId = "";
+let assessmentId = "";
 
 
 const cases: Case[] = [
@@ -117,6 +118,15 @@ const cases: Case[] = [
   { file: "routes/api/v1/tokens.ts", method: "loader", path: () => "/api/v1/tokens", expect: apiRoles(roles, "ok") },
   { file: "routes/api/v1/tokens.ts", method: "action", path: () => "/api/v1/tokens", json: {}, expect: apiRoles(roles, "bad-request") },
   { file: "routes/api/v1/token.ts", method: "action", path: () => "/api/v1/tokens/nope", method2: "DELETE", params: () => ({ tokenId: "nope" }), expect: apiRoles(roles, "not-found") },
+  { file: "routes/sites/assessments.tsx", method: "loader", path: () => `/sites/${siteId}/assessments`, params: () => ({ siteId }), expect: rolesIn(staffRoles, "ok") },
+  { file: "routes/sites/assessments.tsx", method: "action", path: () => `/sites/${siteId}/assessments`, form: {}, params: () => ({ siteId }), expect: rolesIn(inventoryEditors, "bad-request") },
+  { file: "routes/sites/assessment.tsx", method: "loader", path: () => `/sites/${siteId}/assessments/${assessmentId}`, params: () => ({ siteId, assessmentId }), expect: rolesIn(staffRoles, "ok") },
+  { file: "routes/sites/assessment.tsx", method: "action", path: () => `/sites/${siteId}/assessments/${assessmentId}`, form: {}, params: () => ({ siteId, assessmentId }), expect: rolesIn(inventoryEditors, "bad-request") },
+  { file: "routes/sites/assessment-compare.tsx", method: "loader", path: () => `/sites/${siteId}/assessments/${assessmentId}/compare/${assessmentId}`, params: () => ({ siteId, a: assessmentId, b: assessmentId }), expect: rolesIn(staffRoles, "ok") },
+  { file: "routes/api/v1/site-assessments.ts", method: "loader", path: () => `/api/v1/sites/${siteId}/assessments`, params: () => ({ siteId }), expect: apiRoles(staffRoles, "ok") },
+  { file: "routes/api/v1/site-assessments.ts", method: "action", path: () => `/api/v1/sites/${siteId}/assessments`, json: {}, params: () => ({ siteId }), expect: apiRoles(inventoryEditors, "bad-request") },
+  { file: "routes/api/v1/assessment.ts", method: "loader", path: () => `/api/v1/assessments/${assessmentId}`, params: () => ({ assessmentId }), expect: apiRoles(staffRoles, "ok") },
+  { file: "routes/api/v1/assessment-compare.ts", method: "loader", path: () => `/api/v1/assessments/${assessmentId}/compare/${assessmentId}`, params: () => ({ a: assessmentId, b: assessmentId }), expect: apiRoles(staffRoles, "ok") },
   { file: "routes/history/organization.tsx", method: "loader", path: () => "/history", expect: rolesIn(["owner"], "ok") },
   // Last: signing out revokes the fixture sessions.
   { file: "routes/auth/sign-out.ts", method: "action", path: () => "/sign-out", form: {}, expect: () => "signed-out" },
@@ -152,6 +162,13 @@ beforeAll(async () => {
   const [original, thumb] = await db.insert(schema.storedFile).values([file, { ...file, purpose: "photo-thumbnail" }]).returning();
   const [photo] = await db.insert(schema.photo).values({ organizationId: org.id, visitId, fileId: original.id, thumbFileId: thumb.id, widthPx: 1, heightPx: 1 }).returning();
   photoId = photo.id;
+  const emptyPlan = { signs: [], barriers: [], zones: [], notes: "", basis: { signSource: "47 CFR §1.1307(b)(2) and (b)(4)", powerDownThresholdPercent: 5, accessReachM: 1 } };
+  const [frozen] = await db.insert(schema.assessment).values({
+    organizationId: org.id, siteId, name: "Route-table assessment", authorName: "Fixture", standard: "fcc", tier: "general", options: { standard: "fcc", tier: "general", gridStepM: 0.25, heights: { fromM: 0, toM: 2, count: 11 }, mode: "average", reflectionFactor: 1, defaultModel: "spherical" },
+    site: { site: { name: "Route-table site", address: "", city: "" }, client: null }, inventory: { surfaces: [], emitters: [], obstructions: [], accessPoints: [], patterns: [] },
+    runs: [], summary: { worstPercent: 0, worstAt: null, emitters: [], areas: [] }, results: { surfaces: [], emitters: [] }, engine: "isotrope-engine/1", mitigation: emptyPlan,
+  }).returning();
+  assessmentId = frozen.id;
   invitationId = randomUUID();
   await db.insert(schema.invitation).values({
     id: invitationId, organizationId: org.id, email: `invitee-${invitationId}@fixture.test`, role: "engineer",
