@@ -23,6 +23,7 @@ const sections = [
   { to: "emitters", label: "Emitters" },
   { to: "visits", label: "Visits" },
   { to: "assessments", label: "Assessments" },
+  { to: "documents", label: "Documents" },
   { to: "history", label: "History" },
 ];
 
