@@ -26,20 +26,34 @@ function boss(role: "sender" | "worker") {
   });
 }
 
+const made = new WeakMap<PgBoss, Map<string, Promise<void>>>();
+
+/** Makes the queue (or brings its retry and expiry settings up to date), once per instance. */
+function ensureQueue(instance: PgBoss, q: QueueSpec) {
+  let queues = made.get(instance);
+  if (!queues) made.set(instance, (queues = new Map()));
+  let ready = queues.get(q.name);
+  if (!ready) {
+    const options = { name: q.name, retryLimit: q.retryLimit, retryDelay: q.retryDelay, retryBackoff: true, expireInSeconds: q.expireInSeconds };
+    ready = (async () => {
+      if (await instance.getQueue(q.name)) await instance.updateQueue(q.name, options);
+      else await instance.createQueue(q.name, options);
+    })();
+    queues.set(q.name, ready);
+  }
+  return ready;
+}
+
 async function started(instance: PgBoss, queues: QueueSpec[]) {
   instance.on("error", (error) => console.error("[jobs]", error instanceof Error ? error.message : error));
   await instance.start();
-  for (const q of queues) {
-    const options = { name: q.name, retryLimit: q.retryLimit, retryDelay: q.retryDelay, retryBackoff: true, expireInSeconds: q.expireInSeconds };
-    if (await instance.getQueue(q.name)) await instance.updateQueue(q.name, options);
-    else await instance.createQueue(q.name, options);
-  }
+  for (const q of queues) await ensureQueue(instance, q);
   return instance;
 }
 
-/** The process's sending instance (started once, with the queues made). */
-function sender(queues: QueueSpec[]) {
-  return (globalForJobs.isotropeSender ??= started(boss("sender"), queues).catch((error) => {
+/** The process's sending instance (started once). */
+function sender() {
+  return (globalForJobs.isotropeSender ??= started(boss("sender"), []).catch((error) => {
     globalForJobs.isotropeSender = undefined;
     throw error;
   }));
@@ -47,7 +61,8 @@ function sender(queues: QueueSpec[]) {
 
 /** Puts a job on a queue; answers its id. */
 export async function enqueue<T extends object>(queue: QueueSpec, data: T, options: { expireInSeconds?: number; startAfter?: number } = {}): Promise<string> {
-  const b = await sender([queue]);
+  const b = await sender();
+  await ensureQueue(b, queue);
   const id = await b.send(queue.name, data, options);
   if (!id) throw new Error(`the job for ${queue.name} was not queued`);
   return id;
