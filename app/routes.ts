@@ -44,6 +44,7 @@ export default [
   ]),
   route("files/:fileId", "routes/files/file.ts"),
   route("documents/:documentId/pdf", "routes/documents/pdf.ts"),
+  route("verify/:code", "routes/verify.tsx"),
   route("sign-out", "routes/auth/sign-out.ts"),
   ...prefix("api", [
     route("auth/*", "routes/api/auth.ts"),

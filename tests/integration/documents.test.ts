@@ -22,6 +22,7 @@ import * as documentsApi from "~/routes/api/v1/documents";
 import * as pdfApi from "~/routes/api/v1/document-pdf";
 import * as documentPage from "~/routes/documents/document";
 import * as sitePage from "~/routes/documents/site-documents";
+import * as verifyPage from "~/routes/verify";
 import { callApi, type Auth } from "./api-client";
 import { createOrg, makeRequest, outcome, type Org } from "./fixtures";
 import { waitForMail } from "./mail";
@@ -216,7 +217,7 @@ describe("review and issue", () => {
     await announceIssued(docs.letter);
     const [job] = await db.execute<{ data: Parameters<typeof mailJob>[0]["data"] }>(sql`select data from pgboss.job where name = ${MAIL_QUEUE.name} and data->>'to' = ${a.people.client.email} and data->>'attachDocumentId' = ${docs.letter}`);
     expect(job.data.html).toContain("<a href=");
-    expect(job.data.text).toContain(`/documents/${docs.letter}`);
+    expect(job.data.text).toContain(`/documents/${docs.letter}/pdf`);
     await mailJob({ id: "x", data: job.data, retryCount: 0, retryLimit: 1 });
     const mail = await waitForMail(a.people.client.email, /^Issued: Letter to the property manager/);
     expect(mail.text).toContain("attached");
@@ -224,8 +225,31 @@ describe("review and issue", () => {
   }, 60_000);
 });
 
+describe("GET /verify/:code", () => {
+  const verify = (code: string) => outcome(() => verifyPage.loader({ request: makeRequest(`/verify/${code}`), params: { code }, context: {} } as never));
+  it("says valid, superseded (with the newer code) or withdrawn, and 404 for drafts and unknown codes", async () => {
+    const cert = await row(docs.certificate);
+    expect((await verify(cert.code)).status).toBe(404); // still a draft
+    await step(a, "engineer", docs.certificate, { intent: "submit" });
+    await step(a, "reviewer", docs.certificate, { intent: "issue" });
+    const valid = await verify(cert.code.toLowerCase());
+    expect(valid.body).toMatchObject({ certificate: { verdict: "valid", siteName: "Documents fixture roof", city: "Testham", standard: "fcc", tier: "general", newerCode: null } });
+    expect(JSON.stringify(valid.body)).not.toContain("1 Fixture Row"); // the street address stays private
+    const next = (await step(a, "engineer", docs.certificate, { intent: "reissue" })).location!.split("/").pop()!;
+    await step(a, "engineer", next, { intent: "submit" });
+    await step(a, "reviewer", next, { intent: "issue" });
+    const newer = await row(next);
+    expect((await verify(cert.code)).body).toMatchObject({ certificate: { verdict: "superseded", newerCode: newer.code } });
+    await step(a, "reviewer", next, { intent: "withdraw", reason: "Sector added on the north parapet" });
+    expect((await verify(newer.code)).body).toMatchObject({ certificate: { verdict: "withdrawn" } });
+    expect((await verify("ZZZZ-ZZZZ-ZZZZ-ZZZZ-ZZZZ")).status).toBe(404);
+    expect((await verify((await row(docs.letter)).code)).status).toBe(404); // not a certificate
+  });
+});
+
 describe("GET /api/v1/documents", () => {
   it("answers the contract's shape, filters, and shows codes only for certificates and hashes only once issued", async () => {
+    await draft("engineer", "report");
     const got = await list(`?siteId=${siteId}`);
     expect(got.status).toBe(200);
     for (const d of got.body.documents) expect(Object.keys(d).sort()).toEqual(["assessmentId", "code", "id", "issuedAt", "kind", "sha256", "siteId", "state", "version"]);
@@ -233,9 +257,11 @@ describe("GET /api/v1/documents", () => {
     expect(report).toMatchObject({ kind: "report", state: "superseded", siteId, assessmentId: assessment.id, version: 1, code: null, sha256: (await row(docs.report)).sha256 });
     expect(report.issuedAt).toMatch(/^\d{4}-\d\d-\d\dT/);
     const cert = got.body.documents.find((d: { id: string }) => d.id === docs.certificate);
-    expect(cert).toMatchObject({ kind: "certificate", state: "draft", code: (await row(docs.certificate)).code, sha256: null, issuedAt: null });
+    expect(cert).toMatchObject({ kind: "certificate", state: "superseded", code: (await row(docs.certificate)).code });
+    const drafts = (await list(`?siteId=${siteId}&state=draft`)).body.documents;
+    expect(drafts.length).toBeGreaterThan(0);
+    for (const d of drafts) expect(d).toMatchObject({ state: "draft", sha256: null, issuedAt: null });
     expect((await list(`?siteId=${siteId}&kind=letter`)).body.documents.every((d: { kind: string }) => d.kind === "letter")).toBe(true);
-    expect((await list(`?siteId=${siteId}&state=draft`)).body.documents.map((d: { id: string }) => d.id)).toContain(docs.certificate);
     expect((await list("?kind=memo")).status).toBe(400);
   });
 
@@ -244,7 +270,8 @@ describe("GET /api/v1/documents", () => {
     expect(client.status).toBe(200);
     expect(client.body.documents.length).toBeGreaterThan(0);
     expect(client.body.documents.every((d: { state: string }) => d.state === "issued")).toBe(true);
-    expect((await pdfOf(docs.certificate, as(a, "client"))).status).toBe(404); // a draft
+    const draftId = (await list(`?siteId=${siteId}&state=draft`)).body.documents[0].id;
+    expect((await pdfOf(draftId, as(a, "client"))).status).toBe(404); // a draft
     expect((await pdfOf(docs.letter, as(a, "client"))).status).toBe(200);
     expect((await list("", as(a, "regulator"))).status).toBe(403);
     expect((await list("", {})).status).toBe(401);

@@ -135,6 +135,8 @@ const cases: Case[] = [
   { file: "routes/documents/document.tsx", method: "action", path: () => `/sites/${siteId}/documents/${documentId}`, form: {}, params: () => ({ siteId, documentId }), expect: rolesIn(inventoryEditors, "bad-request") },
   // The fixture document is a draft with no PDF yet: staff get 409 (still being made); a client never sees drafts (404).
   { file: "routes/documents/pdf.ts", method: "loader", path: () => `/documents/${documentId}/pdf`, params: () => ({ documentId }), expect: (a) => (a === "anonymous" ? "sign-in" : a === "regulator" ? "forbidden" : a === "client" ? "not-found" : "conflict") },
+  // Public: an unknown (or unissued) certificate code is 404 for everyone.
+  { file: "routes/verify.tsx", method: "loader", path: () => "/verify/ABCD-EFGH-JKLM-NPQR-STUV", params: () => ({ code: "ABCD-EFGH-JKLM-NPQR-STUV" }), expect: () => "not-found" },
   { file: "routes/api/v1/documents.ts", method: "loader", path: () => "/api/v1/documents", expect: apiRoles([...staffRoles, "client"], "ok") },
   { file: "routes/api/v1/document-pdf.ts", method: "loader", path: () => `/api/v1/documents/${documentId}/pdf`, params: () => ({ documentId }), expect: (a) => (a === "anonymous" ? "unauthorized" : a === "regulator" ? "forbidden" : a === "client" ? "not-found" : "conflict") },
   // Last: signing out revokes the fixture sessions.

@@ -100,10 +100,10 @@ export async function renderReport(src: DocumentSource): Promise<Buffer> {
   if (readings.length === 0) paragraph(doc, "No field readings were recorded at this site before the assessment.");
   else {
     const above = readings.filter((r) => r.above);
-    paragraph(doc, above.length ? `${above.length} reading${above.length === 1 ? " is" : "s are"} above the prediction at the same place (marked ABOVE): the prediction there is not conservative and the engineer has reviewed the cause.` : "Every reading is at or below the prediction at the same place.", { color: above.length ? C.danger : C.ink, weight: above.length ? "bold" : "regular" });
+    paragraph(doc, above.length ? `${above.length} reading${above.length === 1 ? " is" : "s are"} above the prediction at the same place (marked ABOVE): there the prediction is not conservative, and the engineer must account for the difference before relying on the prediction at that place.` : "Every reading is at or below the prediction at the same place.", { color: above.length ? C.danger : C.ink, weight: above.length ? "bold" : "regular" });
     table(doc, [{ header: "Reading", width: 1.6 }, { header: "Where (x, y, h)", width: 1.8 }, { header: "As read", width: 1.6, align: "right" }, { header: "Reading, % of limit", width: 1.5, align: "right" }, { header: "Predicted", width: 1.3, align: "right" }, { header: "", width: 1 }],
       readings.map((r) => [`${r.label} (${r.visitedOn})`, `${r.x}, ${r.y}, ${r.heightM} m`, `${r.value} ${r.unit}`, r.percent === null ? "—" : percentText(r.percent), r.predicted === null ? "—" : percentText(r.predicted), r.above ? "ABOVE" : ""]));
-    paragraph(doc, "A broadband reading is taken as a percentage of the lowest limit among the site's frequencies (the conservative reading); the prediction is the assessed value of the grid cell holding the reading's position.", { size: 8, color: C.graphite });
+    paragraph(doc, `A broadband reading is taken as a percentage of the lowest limit among the site's frequencies (the conservative reading); the prediction is the assessed value of the grid cell holding the reading's position (${a.options.mode === "average" ? "a spatial average over the heights assessed, so a reading at one height in a beam can exceed it" : "the maximum over the heights assessed"}).`, { size: 8, color: C.graphite });
   }
 
   // 8. Mitigation.
