@@ -31,6 +31,7 @@ export async function renderJob(job: Job<{ documentId: string }>, after: { issue
   try {
     const pause = Number(process.env.DOCUMENTS_RENDER_PAUSE_MS ?? 0); // for the kill -9 test only
     if (pause > 0) await new Promise((r) => setTimeout(r, pause));
+    const started = Date.now();
     const pdf = await renderPdf(await loadSource(doc));
     const sha256 = createHash("sha256").update(pdf).digest("hex");
     const stored = await db
@@ -38,6 +39,7 @@ export async function renderJob(job: Job<{ documentId: string }>, after: { issue
       .set({ pdf, sha256, byteSize: pdf.length, renderStatus: "ready", renderError: null, renderedAt: new Date() })
       .where(and(eq(document.id, doc.id), asDraft ? inArray(document.state, [...draftStates]) : and(eq(document.state, doc.state), isNull(document.pdf))))
       .returning({ id: document.id });
+    console.log(`[jobs] pid ${process.pid} rendered ${doc.kind} ${doc.id} v${doc.version} (${doc.state}) in ${Date.now() - started} ms${stored.length ? "" : ", not stored: already stored by another run, or its state moved on"}`);
     // The state moved on while rendering (a draft issued): the job for the new state renders it.
     if (stored.length && !asDraft) await after.issued?.(doc.id);
   } catch (error) {
