@@ -103,7 +103,7 @@ export async function issueDocument(who: Who, id: string) {
         await audit(tx, who, "superseded", previous, { state: "issued" }, { state: "superseded", by: doc.id });
       }
     }
-    return { state: "issued", reviewerUserId: who.userId, reviewerName: who.name, issuedAt: now, expiresAt: doc.kind === "certificate" ? certificateExpiry(now) : null, pdf: null, sha256: null, byteSize: null, renderStatus: "queued", renderError: null };
+    return { state: "issued", reviewerUserId: who.userId, reviewerName: who.name, issuedAt: now, expiresAt: doc.kind === "certificate" ? certificateExpiry(now) : null, pdf: null, sha256: null, byteSize: null, renderStatus: "queued", renderAttempts: 0, renderError: null };
   });
   await queueRender(d.id);
   return d;

@@ -13,6 +13,7 @@ import { findDocument } from "~/features/documents/documents.server";
 import { kindLabels, renderLabels, stateLabels } from "~/features/documents/labels";
 import { availableSteps } from "~/features/documents/lifecycle";
 import { REASON_MAX, stepSchema } from "~/features/documents/schemas";
+import { useRenderRefresh } from "~/features/documents/use-render-refresh";
 import { actorOf, scopeOf } from "~/features/sites/scope.server";
 import { redirectWithFlash } from "~/infra/flash.server";
 import { domainErrorReply } from "~/lib/domain-error";
@@ -58,6 +59,7 @@ export async function action({ request, params, context }: Route.ActionArgs) {
 
 export default function DocumentPage({ loaderData, actionData }: Route.ComponentProps) {
   const { doc, steps, isAuthor } = loaderData;
+  useRenderRefresh(doc.renderStatus === "queued" || doc.renderStatus === "rendering");
   const errors = actionData && "error" in actionData ? (actionData.error as Record<string, string[] | null> | undefined) : undefined;
   const facts: [string, React.ReactNode][] = [
     ["State", stateLabels[doc.state]],

@@ -13,6 +13,7 @@ import { draftDocument } from "~/features/documents/commands.server";
 import { listDocuments } from "~/features/documents/documents.server";
 import { kindLabels, renderLabels, stateLabels } from "~/features/documents/labels";
 import { draftSchema } from "~/features/documents/schemas";
+import { useRenderRefresh } from "~/features/documents/use-render-refresh";
 import { actorOf, scopeOf } from "~/features/sites/scope.server";
 import { findSite } from "~/features/sites/sites.server";
 import { redirectWithFlash } from "~/infra/flash.server";
@@ -54,6 +55,7 @@ const column = createColumnHelper<Row>();
 
 export default function SiteDocuments({ loaderData, actionData }: Route.ComponentProps) {
   const { siteId, canDraft, documents, assessments } = loaderData;
+  useRenderRefresh(documents.some((d) => d.renderStatus === "queued" || d.renderStatus === "rendering"));
   const columns = [
     column.accessor("kind", { header: "Document", cell: (c) => <Link to={`/sites/${siteId}/documents/${c.row.original.id}`} className="link font-medium">{kindLabels[c.getValue()]}, version {c.row.original.version}</Link> }),
     column.accessor("state", { header: "State", cell: (c) => stateLabels[c.getValue()] }),
