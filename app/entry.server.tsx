@@ -1,9 +1,6 @@
 // React Router's Node entry, with one addition: a nonce per HTML response, given to React Router's
 // inline scripts and named in the page's Content-Security-Policy.
-import { PassThrough } from "node:stream";
-import { createReadableStreamFromReadable } from "@react-router/node";
-import { isbot } from "isbot";
-import type { RenderToPipeableStreamOptions } from "react-dom/server";
+import { Writable } from "node:stream";
 import { renderToPipeableStream } from "react-dom/server";
 import type { EntryContext, RouterContextProvider } from "react-router";
 import { ServerRouter } from "react-router";
@@ -27,30 +24,36 @@ export default function handleRequest(
     return new Response(null, { status: responseStatusCode, headers: responseHeaders });
   }
 
+  // Every loader has resolved before rendering starts (no page streams deferred data), so the
+  // document is rendered whole and sent as one buffer with its length: one socket write instead
+  // of one per React chunk, which was a tenth of a signed-in page's server time.
   return new Promise<Response>((resolve, reject) => {
     let shellRendered = false;
-    const userAgent = request.headers.get("user-agent");
-    // Crawlers and SPA mode wait for all content; people get the shell as soon as it is ready.
-    const readyOption: keyof RenderToPipeableStreamOptions =
-      (userAgent && isbot(userAgent)) || routerContext.isSpaMode ? "onAllReady" : "onShellReady";
-    let timeoutId: ReturnType<typeof setTimeout> | undefined = setTimeout(() => abort(), streamTimeout + 1000);
+    const chunks: Buffer[] = [];
+    const body = new Writable({
+      write(chunk: Buffer, _encoding, callback) {
+        chunks.push(chunk);
+        callback();
+      },
+      final(callback) {
+        clearTimeout(timeoutId);
+        responseHeaders.set("Content-Type", "text/html; charset=utf-8");
+        const html = Buffer.concat(chunks);
+        responseHeaders.set("Content-Length", String(html.length));
+        resolve(new Response(html, { headers: responseHeaders, status: responseStatusCode }));
+        callback();
+      },
+    });
+    const timeoutId = setTimeout(() => abort(), streamTimeout + 1000);
 
     const { pipe, abort } = renderToPipeableStream(<ServerRouter context={routerContext} url={request.url} nonce={nonce} />, {
       nonce,
-      [readyOption]() {
+      onAllReady() {
         shellRendered = true;
-        const body = new PassThrough({
-          final(callback) {
-            clearTimeout(timeoutId);
-            timeoutId = undefined;
-            callback();
-          },
-        });
-        responseHeaders.set("Content-Type", "text/html");
         pipe(body);
-        resolve(new Response(createReadableStreamFromReadable(body), { headers: responseHeaders, status: responseStatusCode }));
       },
       onShellError(error: unknown) {
+        clearTimeout(timeoutId);
         reject(error);
       },
       onError(error: unknown) {

@@ -215,31 +215,55 @@ describe("frozen means frozen", () => {
   });
 });
 
+describe("PATCH /api/v1/assessments/:id (the mitigation plan only)", () => {
+  it("changes what it is given, keeps the rest, refuses a stale version, other roles and other organisations", async () => {
+    const x = (await freeze({ ...quick, name: "Plan by API" })).body.assessment;
+    const patch = (json: unknown, auth: Auth = as(a, "engineer")) => callApi(assessmentApi, "PATCH", `/api/v1/assessments/${x.id}`, { auth, json, params: { assessmentId: x.id } });
+    const sign = x.mitigation.signs[0];
+    const got = await patch({ mitigationVersion: 1, signs: [{ id: sign.id, category: sign.category, x: 2, y: 3, where: sign.where, note: sign.note }] });
+    expect(got.status).toBe(200);
+    expect(got.body.assessment.mitigation.version).toBe(2);
+    expect(got.body.assessment.mitigation.signs[0]).toMatchObject({ id: sign.id, x: 2, y: 3 });
+    expect(got.body.assessment.mitigation.barriers).toEqual(x.mitigation.barriers); // not given: kept
+    expect(got.body.assessment.runs).toEqual(x.runs);
+    expect((await patch({ mitigationVersion: 1, notes: "late" })).status).toBe(409);
+    expect((await patch({ mitigationVersion: 2, signs: [{ id: sign.id, category: "danger", x: 0, y: 0 }] })).body.error.fields).toEqual({ "signs[0].category": "Choose a sign: information, notice, caution, warning." });
+    expect((await patch({ mitigationVersion: 2, notes: "x" }, as(a, "billing"))).status).toBe(403);
+    expect((await patch({ mitigationVersion: 2, notes: "x" }, as(b, "owner"))).status).toBe(404);
+  });
+});
+
 describe("the mitigation plan, edited on the assessment page", () => {
-  it("moves, re-categorises and removes signs, adds one, keeps chosen barriers, and refuses a stale version", async () => {
+  it("moves, re-categorises and removes signs, adds one, removes a barrier, saves notes, and refuses a stale version", async () => {
     const x = (await freeze({ ...quick, name: "Plan edits" })).body.assessment;
     const [first, second] = x.mitigation.signs;
     const post = (form: Record<string, string>) =>
       outcome(() => assessmentPage.action({ request: makeRequest(`/sites/${siteId}/assessments/${x.id}`, { cookie: a.people.engineer.cookie, form }), params: { siteId, assessmentId: x.id }, context: {} } as never));
-    const saved = await post({
-      intent: "save-plan", mitigationVersion: "1", notes: "Barriers to be fitted by the landlord's contractor.",
-      "signs[0].id": first.id, "signs[0].category": "caution", "signs[0].x": "3.5", "signs[0].y": "4", "signs[0].where": "Moved to the parapet", "signs[0].note": "",
-      "signs[1].id": second.id, "signs[1].category": second.category, "signs[1].x": String(second.x), "signs[1].y": String(second.y), "signs[1].remove": "on",
-    });
+    // Each small form of the page: one sign saved, one removed, the notes, one barrier removed.
+    const saved = await post({ intent: "save-plan", mitigationVersion: "1", "signs[0].id": first.id, "signs[0].category": "caution", "signs[0].x": "3.5", "signs[0].y": "4", "signs[0].where": "Moved to the parapet", "signs[0].note": "" });
     expect(saved.status).toBe(302);
-    const added = await post({ intent: "add-sign", mitigationVersion: "2", category: "notice", x: "1", y: "1", where: "Stair landing", note: "" });
+    const removed = await post({ intent: "save-plan", mitigationVersion: "2", "signs[0].id": second.id, "signs[0].category": second.category, "signs[0].x": String(second.x), "signs[0].y": String(second.y), "signs[0].remove": "on" });
+    expect(removed.status).toBe(302);
+    expect((await post({ intent: "save-plan", mitigationVersion: "3", notes: "Barriers to be fitted by the landlord's contractor." })).status).toBe(302);
+    expect(x.mitigation.barriers.length).toBeGreaterThan(0);
+    const barrier = x.mitigation.barriers[0].id;
+    expect((await post({ intent: "save-plan", mitigationVersion: "4", "removeBarriers[0]": barrier })).status).toBe(302);
+    const deck = x.runs[1].surfaceId;
+    const elsewhere = await post({ intent: "add-sign", mitigationVersion: "5", surfaceId: "not-a-surface", category: "notice", x: "1", y: "1" });
+    expect(elsewhere.status).toBe(400);
+    const added = await post({ intent: "add-sign", mitigationVersion: "5", surfaceId: deck, category: "notice", x: "1", y: "1", where: "Stair landing", note: "" });
     expect(added.status).toBe(302);
-    const stale = await post({ intent: "add-sign", mitigationVersion: "2", category: "notice", x: "1", y: "1" });
+    const stale = await post({ intent: "add-sign", mitigationVersion: "5", category: "notice", x: "1", y: "1" });
     expect(stale.status).toBe(409);
     const plan = (await getOne(x.id)).body.assessment.mitigation;
-    expect(plan.version).toBe(3);
+    expect(plan.version).toBe(6);
     expect(plan.notes).toBe("Barriers to be fitted by the landlord's contractor.");
     expect(plan.signs.find((s: { id: string }) => s.id === first.id)).toMatchObject({ category: "caution", x: 3.5, y: 4, where: "Moved to the parapet" });
     expect(plan.signs.find((s: { id: string }) => s.id === second.id)).toBeUndefined();
-    expect(plan.signs.at(-1)).toMatchObject({ category: "notice", x: 1, y: 1, origin: "engineer", where: "Stair landing" });
+    expect(plan.signs.at(-1)).toMatchObject({ category: "notice", x: 1, y: 1, z: 3, surfaceId: deck, origin: "engineer", where: "Stair landing" });
     expect(plan.signs).toHaveLength(x.mitigation.signs.length);
-    expect(plan.barriers).toEqual([]); // none ticked to keep
-    const bad = await post({ intent: "add-sign", mitigationVersion: "3", category: "danger", x: "north", y: "1" });
+    expect(plan.barriers.map((b: { id: string }) => b.id)).toEqual(x.mitigation.barriers.slice(1).map((b: { id: string }) => b.id));
+    const bad = await post({ intent: "add-sign", mitigationVersion: "6", category: "danger", x: "north", y: "1" });
     expect(bad.status).toBe(400);
   });
 });

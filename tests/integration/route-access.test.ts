@@ -126,6 +126,7 @@ const cases: Case[] = [
   { file: "routes/sites/assessment-compare.tsx", method: "loader", path: () => `/sites/${siteId}/assessments/${assessmentId}/compare/${assessmentId}`, params: () => ({ siteId, a: assessmentId, b: assessmentId }), expect: rolesIn(staffRoles, "ok") },
   { file: "routes/api/v1/site-assessments.ts", method: "loader", path: () => `/api/v1/sites/${siteId}/assessments`, params: () => ({ siteId }), expect: apiRoles(staffRoles, "ok") },
   { file: "routes/api/v1/site-assessments.ts", method: "action", path: () => `/api/v1/sites/${siteId}/assessments`, json: {}, params: () => ({ siteId }), expect: apiRoles(inventoryEditors, "bad-request") },
+  { file: "routes/api/v1/assessment.ts", method: "action", path: () => `/api/v1/assessments/${assessmentId}`, method2: "PATCH", json: {}, params: () => ({ assessmentId }), expect: apiRoles(inventoryEditors, "bad-request") },
   { file: "routes/api/v1/assessment.ts", method: "loader", path: () => `/api/v1/assessments/${assessmentId}`, params: () => ({ assessmentId }), expect: apiRoles(staffRoles, "ok") },
   { file: "routes/api/v1/assessment-compare.ts", method: "loader", path: () => `/api/v1/assessments/${assessmentId}/compare/${assessmentId}`, params: () => ({ a: assessmentId, b: assessmentId }), expect: apiRoles(staffRoles, "ok") },
   { file: "routes/history/organization.tsx", method: "loader", path: () => "/history", expect: rolesIn(["owner"], "ok") },

@@ -1,5 +1,6 @@
 // The frozen results as tables: per surface the worst point, its largest contributors and the area in
 // each class; per emitter its EIRP and compliance distances for both tiers.
+import { figure, figure3 } from "./format";
 import type { AssessmentView } from "./view";
 
 const m2 = (v: number) => <span className="figures">{v.toFixed(1)} m²</span>;
@@ -21,9 +22,9 @@ export function AssessmentTables({ view }: { view: Pick<AssessmentView, "surface
               {view.surfaces.map((s) => (
                 <tr key={s.surfaceId} className="border-b border-rule last:border-b-0">
                   <th scope="row" className={`${td} text-left font-medium break-words`}>{s.name}{s.kind === "facade" ? " (facade)" : ""}</th>
-                  <td className={`${td} figures`}>{s.worstPercent.toPrecision(4)} %</td>
+                  <td className={`${td} figures`}>{figure(s.worstPercent)} %</td>
                   <td className={`${td} figures whitespace-nowrap`}>{s.worstAt ? `${s.worstAt.x}, ${s.worstAt.y}, ${s.worstAt.z}` : "—"}</td>
-                  <td className={td}>{s.contributions.map((c) => `${c.id} ${c.percent.toPrecision(3)} %`).join("; ") || "—"}</td>
+                  <td className={td}>{s.contributions.map((c) => `${c.id} ${figure3(c.percent)} %`).join("; ") || "—"}</td>
                   <td className={td}>{m2(s.areas.totalM2)}</td>
                   <td className={td}>{m2(s.areas.overGeneralM2)}</td>
                   <td className={td}>{m2(s.areas.overOccupationalM2)}</td>
@@ -50,7 +51,7 @@ export function AssessmentTables({ view }: { view: Pick<AssessmentView, "surface
                   <td className={`${td} break-words`}>{e.operator || "—"}</td>
                   <td className={`${td} break-words`}>{e.band || "—"}</td>
                   <td className={`${td} figures whitespace-nowrap`}>{e.frequencyMHz} MHz</td>
-                  <td className={`${td} figures whitespace-nowrap`}>{e.eirpW.toPrecision(4)} W</td>
+                  <td className={`${td} figures whitespace-nowrap`}>{figure(e.eirpW)} W</td>
                   <td className={`${td} figures whitespace-nowrap`}>{e.complianceDistanceM.general.toFixed(2)} m</td>
                   <td className={`${td} figures whitespace-nowrap`}>{e.complianceDistanceM.occupational.toFixed(2)} m</td>
                 </tr>

@@ -49,23 +49,23 @@ export async function requireAssessment(scope: Scope, id: string, siteId?: strin
   return row;
 }
 
-async function changePlan(who: Actor & Scope, id: string, version: number, change: (plan: MitigationPlan) => MitigationPlan) {
+async function changePlan(who: Actor & Scope, id: string, version: number, change: (plan: MitigationPlan, found: AssessmentRow) => MitigationPlan) {
   const found = await requireAssessment(who, id);
   return db.transaction(async (tx) => {
     const [current] = await tx.select().from(assessment).where(eq(assessment.id, found.id)).for("update");
     if (current.mitigationVersion !== version) throw new DomainError("Someone else saved this plan after you opened it. Your change was not saved: review their version, then apply yours again.", 409, undefined, { current: { mitigation: current.mitigation, mitigationVersion: current.mitigationVersion } });
     const before = current.mitigation as MitigationPlan;
-    const after = change(before);
+    const after = change(before, current);
     const [row] = await tx.update(assessment).set({ mitigation: after, mitigationVersion: current.mitigationVersion + 1, updatedAt: new Date() }).where(eq(assessment.id, found.id)).returning();
     await auditChange(tx, who, { action: "assessment.mitigation-updated", entity: "assessment", entityId: found.id, siteId: found.siteId, before: { signs: before.signs.length, barriers: before.barriers.length, notes: before.notes }, after: { signs: after.signs.length, barriers: after.barriers.length, notes: after.notes } });
     return row;
   });
 }
 
-/** Saves the edited plan: signs moved, re-categorised or removed, barriers kept, notes. */
+/** Saves an edit of the plan: signs moved, re-categorised or removed, barriers removed, notes (what is not given stays). */
 export function updateMitigation(who: Actor & Scope, id: string, edit: MitigationEdit) {
   return changePlan(who, id, edit.mitigationVersion, (plan) => {
-    const edited = new Map(edit.signs.filter((s) => s.id).map((s) => [s.id!, s]));
+    const edited = new Map((edit.signs ?? []).filter((s) => s.id).map((s) => [s.id!, s]));
     const signs: Sign[] = [];
     for (const sign of plan.signs) {
       const e = edited.get(sign.id);
@@ -76,15 +76,18 @@ export function updateMitigation(who: Actor & Scope, id: string, edit: Mitigatio
       if (e.remove) continue;
       signs.push({ ...sign, category: e.category, x: e.x, y: e.y, where: e.where, note: e.note });
     }
-    const keep = new Set(edit.keepBarriers);
-    return { ...plan, signs, barriers: plan.barriers.filter((b) => keep.has(b.id)), notes: edit.notes };
+    const drop = new Set(edit.removeBarriers ?? []);
+    return { ...plan, signs, barriers: plan.barriers.filter((b) => !drop.has(b.id)), notes: edit.notes ?? plan.notes };
   });
 }
 
 export function addSign(who: Actor & Scope, id: string, input: SignAdd) {
-  return changePlan(who, id, input.mitigationVersion, (plan) => {
+  return changePlan(who, id, input.mitigationVersion, (plan, found) => {
     const next = Math.max(0, ...plan.signs.map((s) => Number(s.id.replace(/\D/g, "")) || 0)) + 1;
-    const sign: Sign = { id: `s${next}`, category: input.category, x: input.x, y: input.y, z: 0, surfaceId: null, origin: "engineer", accessPointId: null, where: input.where, note: input.note };
+    const surfaces = ((found.inventory as { surfaces?: { id: string; kind: string; elevationM?: number | null }[] }).surfaces ?? []).filter((s) => s.kind === "area");
+    const surface = input.surfaceId ? surfaces.find((s) => s.id === input.surfaceId) : undefined;
+    if (input.surfaceId && !surface) throw new DomainError("Choose one of the assessment's surfaces.", 400, "surfaceId");
+    const sign: Sign = { id: `s${next}`, category: input.category, x: input.x, y: input.y, z: surface?.elevationM ?? 0, surfaceId: surface?.id ?? null, origin: "engineer", accessPointId: null, where: input.where, note: input.note };
     return { ...plan, signs: [...plan.signs, sign] };
   });
 }

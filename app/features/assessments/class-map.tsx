@@ -7,8 +7,8 @@ import type { Barrier, Sign } from "~/features/exposure/mitigation";
 import { boundsOf, makeFrame, type XY } from "~/features/layout/plan-frame";
 
 export type MapGrid = { x0: number; y0: number; step: number; nx: number; ny: number };
-/** Class 0 lightest, class 3 darkest: cividis runs from dark blue to light yellow, so it is read backwards. */
-export const classColours = [0.95, 0.68, 0.4, 0.08].map((t) => interpolateCividis(t));
+/** Class 0 left unfilled (white); classes 1–3 darker as they rise: cividis runs from dark blue to light yellow, so it is read backwards. */
+export const classColours = ["none", ...[0.82, 0.5, 0.12].map((t) => interpolateCividis(t))];
 export const classShort = ["within the general-population limit", "above it, within the occupational", "above the occupational, up to 10×", "over 10× the occupational limit"];
 const signLetter = { information: "I", notice: "N", caution: "C", warning: "W" } as const;
 
@@ -36,7 +36,7 @@ export function ClassMap({ name, polygon, grid, classes, obstructions = [], acce
       const c = classes[j * grid.nx + i];
       let end = i + 1;
       while (end < grid.nx && classes[j * grid.nx + end] === c) end++;
-      if (c !== 255 && c !== undefined) {
+      if (c !== 255 && c !== 0 && c !== undefined) {
         const [x, y] = frame.toPx(grid.x0 + i * grid.step - grid.step / 2, grid.y0 + j * grid.step + grid.step / 2);
         cells.push(<rect key={`${j}-${i}`} x={x} y={y} width={(end - i) * px + 0.3} height={px + 0.3} fill={classColours[c]} />);
       }
@@ -47,7 +47,13 @@ export function ClassMap({ name, polygon, grid, classes, obstructions = [], acce
   return (
     <svg viewBox={`0 0 ${frame.width} ${frame.height}`} role="img" aria-labelledby={titleId} className="block h-auto w-full rounded-sheet border border-rule bg-white">
       <title id={titleId}>{`${name}: exposure classes${signs.length ? ", signs" : ""}${barriers.length ? " and barriers" : ""}`}</title>
-      <g>{cells}</g>
+      <defs>
+        <clipPath id={`${titleId}-clip`}>
+          <path d={path(polygon, true)} />
+        </clipPath>
+      </defs>
+      {/* Cells are whole grid squares around centres inside the outline; the outline clips them. */}
+      <g clipPath={`url(#${titleId}-clip)`}>{cells}</g>
       <path d={path(polygon, true)} fill="none" className="stroke-ink-900" strokeWidth={1.5} />
       {obstructions.map((o) => (
         <path key={o.id} d={path(o.polygon, true)} className="fill-paper-deep stroke-graphite-600" strokeWidth={1} />

@@ -1,6 +1,7 @@
 // What changed between two assessments: options, inventory records (added, removed, each changed
 // field before and after) and results (worst point and areas per surface, A beside B).
 import type { Comparison, Pair, RecordDiff } from "./compare";
+import { figure } from "./format";
 
 const th = "label-caps px-3 py-2 text-left font-medium";
 const td = "px-3 py-2 align-top";
@@ -34,7 +35,7 @@ const pair = (p: Pair, unit: string, digits: (v: number) => string) => (
 );
 
 export function ComparisonTables({ comparison }: { comparison: Comparison }) {
-  const pct = (v: number) => v.toPrecision(4);
+  const pct = figure;
   const area = (v: number) => v.toFixed(1);
   return (
     <>

@@ -37,18 +37,22 @@ export const signEditSchema = z.strictObject({
   remove: z.boolean().optional().default(false),
 });
 
-/** The plan as edited on the page: every sign (moved, re-categorised, removed), the barriers kept, the notes. */
-export const mitigationEditSchema = z.strictObject({
+/**
+ * An edit of the plan (the API's PATCH and each of the page's small forms: one sign, one barrier, the
+ * notes): signs named by id are changed or removed, barriers named are removed, what is left out stays.
+ */
+export const mitigationPatchSchema = z.strictObject({
   mitigationVersion: version,
-  notes: text(4000).default(""),
-  signs: z.array(signEditSchema).max(500, "Keep at most 500 signs.").default([]),
-  keepBarriers: z.array(z.string().max(20)).max(500).default([]),
+  notes: text(4000).optional(),
+  signs: z.array(signEditSchema.extend({ id: z.string({ error: "Name the sign by its id." }).max(20) })).max(500, "Keep at most 500 signs.").optional(),
+  removeBarriers: z.array(z.string().max(20)).max(500).optional(),
 });
-export type MitigationEdit = z.output<typeof mitigationEditSchema>;
+export type MitigationEdit = z.output<typeof mitigationPatchSchema>;
 
-/** One sign added to the plan. */
+/** One sign added to the plan, on one of the assessment's surfaces (none: the site's datum level). */
 export const signAddSchema = z.strictObject({
   mitigationVersion: version,
+  surfaceId: z.string().max(64).optional(),
   category: signEditSchema.shape.category,
   x: coordinate("x in metres"),
   y: coordinate("y in metres"),

@@ -7,6 +7,7 @@ import { createContext, type MiddlewareFunction } from "react-router";
 import { auth } from "~/features/auth/auth.server";
 import { db, schema } from "~/infra/db.server";
 import { isRole, type Role } from "~/lib/roles";
+import { readSessionFast, type FastRead } from "./fast-session.server";
 
 export type SignedIn = Awaited<ReturnType<typeof auth.api.getSession>>;
 export type Membership = NonNullable<Awaited<ReturnType<typeof findMembership>>>;
@@ -32,14 +33,21 @@ export async function findMembership(userId: string, activeOrganizationId?: stri
   return { ...row, role: row.role as Role };
 }
 
-/** A lookup that asks better-auth and the database on first use only. */
+/**
+ * A lookup that asks on first use only: one joined query for the common signed-in case
+ * (fast-session.server.ts), better-auth and the membership query for everything else.
+ */
 export function sessionLookup(request: Request): SessionLookup {
+  let fast: Promise<FastRead | undefined> | undefined;
   let signedIn: Promise<SignedIn> | undefined;
   let membership: Promise<Membership | null> | undefined;
+  const fastRead = () => (fast ??= readSessionFast(request.headers));
   const lookup: SessionLookup = {
-    signedIn: () => (signedIn ??= auth.api.getSession({ headers: request.headers })),
+    signedIn: () => (signedIn ??= fastRead().then((f) => (f ? f.signedIn : auth.api.getSession({ headers: request.headers })))),
     membership: () =>
-      (membership ??= lookup.signedIn().then((s) => (s ? findMembership(s.user.id, s.session.activeOrganizationId) : null))),
+      (membership ??= fastRead().then((f) =>
+        f ? f.membership : lookup.signedIn().then((s) => (s ? findMembership(s.user.id, s.session.activeOrganizationId) : null)),
+      )),
   };
   return lookup;
 }

@@ -1,5 +1,5 @@
 // Members of an organisation: list, count, change role, remove. Every write in one transaction with its audit event.
-import { and, asc, eq, gt, sql } from "drizzle-orm";
+import { and, asc, eq, sql } from "drizzle-orm";
 import { db, schema, type Tx } from "~/infra/db.server";
 import { audit, type Actor } from "~/lib/audit.server";
 import { DomainError } from "~/lib/domain-error";
@@ -18,11 +18,18 @@ export async function listMembers(organizationId: string) {
     .orderBy(asc(user.name));
 }
 
-/** Member and waiting-invitation counts for the overview. */
+/** Member and waiting-invitation counts for the owner's overview: one round trip, built once. */
+const teamCountsQuery = db
+  .select({
+    members: sql<number>`count(*)::int`,
+    pending: sql<number>`(select count(*)::int from ${invitation} where ${invitation.organizationId} = ${sql.placeholder("organizationId")} and ${invitation.status} = 'pending' and ${invitation.expiresAt} > now())`,
+  })
+  .from(member)
+  .where(eq(member.organizationId, sql.placeholder("organizationId")))
+  .prepare("team_counts");
+
 export async function teamCounts(organizationId: string) {
-  // One round trip: the waiting invitations are counted in a subquery.
-  const pending = db.$count(invitation, and(eq(invitation.organizationId, organizationId), eq(invitation.status, "pending"), gt(invitation.expiresAt, new Date())));
-  const [row] = await db.select({ members: sql<number>`count(*)::int`, pending }).from(member).where(eq(member.organizationId, organizationId));
+  const [row] = await teamCountsQuery.execute({ organizationId });
   return { members: row?.members ?? 0, pending: row?.pending ?? 0 };
 }
 

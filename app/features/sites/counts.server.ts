@@ -2,13 +2,18 @@
 import { eq, sql } from "drizzle-orm";
 import { db, schema } from "~/infra/db.server";
 
+const organizationId = sql.placeholder("organizationId");
+/** Built once (every staff overview asks it). */
+const counts = db
+  .select({
+    sites: sql<number>`(select count(*)::int from ${schema.site} where ${schema.site.organizationId} = ${organizationId})`,
+    clients: sql<number>`(select count(*)::int from ${schema.client} where ${schema.client.organizationId} = ${organizationId})`,
+  })
+  .from(schema.organization)
+  .where(eq(schema.organization.id, organizationId))
+  .prepare("inventory_counts");
+
 export async function inventoryCounts(organizationId: string) {
-  const [row] = await db
-    .select({
-      sites: sql<number>`(select count(*)::int from ${schema.site} where ${schema.site.organizationId} = ${organizationId})`,
-      clients: sql<number>`(select count(*)::int from ${schema.client} where ${schema.client.organizationId} = ${organizationId})`,
-    })
-    .from(schema.organization)
-    .where(eq(schema.organization.id, organizationId));
+  const [row] = await counts.execute({ organizationId });
   return { sites: row?.sites ?? 0, clients: row?.clients ?? 0 };
 }

@@ -7,7 +7,8 @@ import { addSign, findAssessment, requireAssessment, updateMitigation } from "~/
 import { AssessmentTables } from "~/features/assessments/assessment-tables";
 import { ClassLegend, ClassMap } from "~/features/assessments/class-map";
 import { MitigationEditor } from "~/features/assessments/mitigation-editor";
-import { mitigationEditSchema, signAddSchema } from "~/features/assessments/schemas";
+import { mitigationPatchSchema, signAddSchema } from "~/features/assessments/schemas";
+import { figure } from "~/features/assessments/format";
 import { assessmentView } from "~/features/assessments/view";
 import { requireMember } from "~/features/auth/guard.server";
 import { describeHeights, standardLabels, tierLabels } from "~/features/exposure/options";
@@ -32,7 +33,7 @@ export async function action({ request, params, context }: Route.ActionArgs) {
   const member = await requireMember({ request, context }, { roles: inventoryEditors });
   const formData = await readFormData(request);
   const adding = formData.get("intent") === "add-sign";
-  const submission = adding ? await parseForm(formData, signAddSchema) : await parseForm(formData, mitigationEditSchema);
+  const submission = adding ? await parseForm(formData, signAddSchema) : await parseForm(formData, mitigationPatchSchema);
   if (submission.status !== "success") return data(submission.reply(), { status: 400 });
   try {
     await requireAssessment(scopeOf(member), params.assessmentId, params.siteId);
@@ -74,7 +75,7 @@ export default function Assessment({ loaderData, actionData }: Route.ComponentPr
       <Card title="Worst point">
         {view.summary.worstAt ? (
           <p className="text-base">
-            <span className="figures text-2xl font-bold">{view.summary.worstPercent.toPrecision(4)} %</span> of the {view.tier === "general" ? "general-population" : "occupational"} limit, at x = {view.summary.worstAt.x} m, y = {view.summary.worstAt.y} m, z = {view.summary.worstAt.z} m on {surfaceName(view.summary.worstAt.surfaceId)}.
+            <span className="figures text-2xl font-bold">{figure(view.summary.worstPercent)} %</span> of the {view.tier === "general" ? "general-population" : "occupational"} limit, at x = {view.summary.worstAt.x} m, y = {view.summary.worstAt.y} m, z = {view.summary.worstAt.z} m on {surfaceName(view.summary.worstAt.surfaceId)}.
           </p>
         ) : (
           <p>No emitter was on air, so nothing was evaluated.</p>
@@ -97,7 +98,7 @@ export default function Assessment({ loaderData, actionData }: Route.ComponentPr
       </section>
       <section id="plan" aria-labelledby="plan-title" className="space-y-3">
         <h3 id="plan-title" className="text-lg font-semibold">Mitigation plan</h3>
-        <MitigationEditor plan={view.mitigation} version={view.mitigationVersion} canEdit={canEdit} result={actionData} labelOf={labelOf} />
+        <MitigationEditor plan={view.mitigation} version={view.mitigationVersion} canEdit={canEdit} result={actionData} labelOf={labelOf} surfaces={view.surfaces.filter((s) => s.map).map((s) => ({ id: s.surfaceId, name: s.name }))} />
       </section>
     </article>
   );

@@ -4,6 +4,7 @@ import { Card } from "~/components/panels";
 import { DateText } from "~/components/date-text";
 import { TableShell } from "~/components/table-shell";
 import { listAssessments } from "~/features/assessments/assessments.server";
+import { figure } from "~/features/assessments/format";
 import { FreezeForm } from "~/features/assessments/freeze-form";
 import { freezeAssessment } from "~/features/assessments/freeze.server";
 import { freezeFormSchema } from "~/features/assessments/schemas";
@@ -55,7 +56,7 @@ export default function Assessments({ loaderData, actionData }: Route.ComponentP
     column.accessor("createdAt", { header: "Frozen", cell: (c) => <DateText value={c.getValue()} /> }),
     column.accessor("authorName", { header: "Author", cell: (c) => <span className="break-words">{c.getValue()}</span> }),
     column.accessor("standard", { header: "Standard, tier", cell: (c) => `${standardLabels[c.getValue()] ?? c.getValue()}, ${c.row.original.tier}` }),
-    column.accessor("worstPercent", { header: "Worst point", cell: (c) => <span className="figures">{c.getValue().toPrecision(4)} %</span> }),
+    column.accessor("worstPercent", { header: "Worst point", cell: (c) => <span className="figures">{figure(c.getValue())} %</span> }),
     column.accessor("previousId", { header: "Compare", cell: (c) => (c.getValue() ? <Link className="link whitespace-nowrap" to={`/sites/${siteId}/assessments/${c.getValue()}/compare/${c.row.original.id}`}>with the one before</Link> : <span className="text-graphite-500">—</span>) }),
   ];
   return (
