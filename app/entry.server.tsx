@@ -8,6 +8,9 @@ import { contentSecurityPolicy, createNonce } from "~/infra/content-security-pol
 
 export const streamTimeout = 5_000;
 
+// The background work (PDF rendering, e-mail), started by server/index.mjs unless WORKER=off.
+export { startBackgroundWork, stopBackgroundWork } from "~/features/documents/worker.server";
+
 export default function handleRequest(
   request: Request,
   responseStatusCode: number,

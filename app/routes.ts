@@ -40,6 +40,8 @@ export default [
         route("assessments", "routes/sites/assessments.tsx"),
         route("assessments/:assessmentId", "routes/sites/assessment.tsx"),
         route("assessments/:a/compare/:b", "routes/sites/assessment-compare.tsx"),
+        route("documents", "routes/documents/site-documents.tsx"),
+        route("documents/:documentId", "routes/documents/document.tsx"),
       ]),
     ]),
     route("history", "routes/history/organization.tsx"),
@@ -48,6 +50,8 @@ export default [
     route("*", "routes/not-found.tsx"),
   ]),
   route("files/:fileId", "routes/files/file.ts"),
+  route("documents/:documentId/pdf", "routes/documents/pdf.ts"),
+  route("verify/:code", "routes/verify.tsx"),
   route("sign-out", "routes/auth/sign-out.ts"),
   ...prefix("api", [
     route("auth/*", "routes/api/auth.ts"),
@@ -71,5 +75,7 @@ export default [
     route("v1/sites/:siteId/assessments", "routes/api/v1/site-assessments.ts"),
     route("v1/assessments/:assessmentId", "routes/api/v1/assessment.ts"),
     route("v1/assessments/:a/compare/:b", "routes/api/v1/assessment-compare.ts"),
+    route("v1/documents", "routes/api/v1/documents.ts"),
+    route("v1/documents/:documentId/pdf", "routes/api/v1/document-pdf.ts"),
   ]),
 ] satisfies RouteConfig;

@@ -4,6 +4,7 @@ import { sql as rawSql } from "drizzle-orm";
 import { auth } from "../app/features/auth/auth.server";
 import { db, schema, sql } from "../app/infra/db.server";
 import type { Role } from "../app/lib/roles";
+import { seedDocuments } from "./demo/documents";
 import { seedInventory } from "./demo/inventory";
 
 const password = process.env.DEMO_PASSWORD ?? "isotrope-demo";
@@ -35,6 +36,7 @@ async function main() {
     return;
   }
   const hash = await (await auth.$context).password.hash(password);
+  let mainOrganizationId = "";
   await db.transaction(async (tx) => {
     for (const [index, org] of organisations.entries()) {
       const organizationId = randomUUID();
@@ -49,8 +51,10 @@ async function main() {
         members[person.role] = { userId, memberId };
       }
       if (index === 0) await seedInventory(tx, { organizationId, engineerId: members.engineer!.userId, clientMemberId: members.client?.memberId ?? null });
+      if (index === 0) mainOrganizationId = organizationId;
     }
   });
+  await seedDocuments(mainOrganizationId);
   console.log(`demo scenario seeded: ${organisations.map((o) => o.name).join(", ")}`);
 }
 

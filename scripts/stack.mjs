@@ -158,6 +158,11 @@ async function migrate(databaseUrl) {
   } finally {
     await sql.end();
   }
+  // The job queue's own tables (pg-boss, schema "pgboss"), so every app server and worker finds them.
+  const { default: PgBoss } = await import("pg-boss");
+  const boss = new PgBoss({ connectionString: databaseUrl, schema: "pgboss", supervise: false, schedule: false, max: 1 });
+  await boss.start();
+  await boss.stop({ graceful: false, wait: true });
   log("migrations applied");
 }
 
@@ -265,6 +270,10 @@ async function test() {
     log("installing Chromium from Debian's packages …");
     run("apt-get", ["update", "-qq"]);
     run("apt-get", ["install", "-y", "-qq", "chromium"], { env: { ...process.env, DEBIAN_FRONTEND: "noninteractive" } });
+  }
+  if (!existsSync("/usr/bin/pdftotext")) {
+    if (!isRoot) fail("Debian's poppler-utils (pdftotext, pdftoppm) is needed for the document tests:  sudo apt-get install -y poppler-utils");
+    run("apt-get", ["install", "-y", "-qq", "poppler-utils"], { env: { ...process.env, DEBIAN_FRONTEND: "noninteractive" } });
   }
   process.env.STACK_QUIET = "1";
   const { env } = await services();

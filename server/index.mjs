@@ -19,12 +19,13 @@ const host = process.env.HOST || undefined;
 const appUrl = process.env.APP_URL ?? `http://127.0.0.1:${port}`;
 const server = createServer();
 
-/** @returns {Promise<Pick<import("./app.mjs").AppOptions, "getHandler" | "mountAssets"> & { close?: () => Promise<void> }>} */
+/** @typedef {{ startBackgroundWork?: () => Promise<unknown>, stopBackgroundWork?: () => Promise<void> }} Jobs */
+/** @returns {Promise<Pick<import("./app.mjs").AppOptions, "getHandler" | "mountAssets"> & { close?: () => Promise<void>, jobs: () => Promise<Jobs> }>} */
 async function production() {
   const buildDir = resolve(root, process.env.BUILD_DIR ?? "build");
   const build = await import(pathToFileURL(join(buildDir, "server/index.js")).href);
   const handler = createRequestHandler(build, "production");
-  return { getHandler: async () => handler, mountAssets: (app) => app.use(staticFiles(join(buildDir, "client"))) };
+  return { getHandler: async () => handler, mountAssets: (app) => app.use(staticFiles(join(buildDir, "client"))), jobs: async () => /** @type {Jobs} */ (build.entry.module) };
 }
 
 async function development() {
@@ -32,7 +33,8 @@ async function development() {
   const vite = await createVite({ root, appType: "custom", server: { middlewareMode: true, hmr: { server } } });
   const load = async () => /** @type {import("react-router").ServerBuild} */ (await vite.ssrLoadModule("virtual:react-router/server-build"));
   const handler = createRequestHandler(load, "development");
-  return { getHandler: async () => handler, mountAssets: (/** @type {import("express").Express} */ app) => app.use(vite.middlewares), close: () => vite.close() };
+  const jobs = async () => /** @type {Jobs} */ ((await load()).entry.module);
+  return { getHandler: async () => handler, mountAssets: (/** @type {import("express").Express} */ app) => app.use(vite.middlewares), close: () => vite.close(), jobs };
 }
 
 try {
@@ -45,9 +47,18 @@ try {
     process.exit(1);
   });
   server.listen(port, host, () => console.log(`[isotrope] ${dev ? "development" : "production"} server on ${host ?? "all interfaces"}:${port}, public address ${appUrl}`));
+  // PDF rendering and e-mail run here too unless WORKER=off (then run `npm run worker` apart).
+  const jobs = await mode.jobs();
+  if (process.env.WORKER !== "off") {
+    jobs.startBackgroundWork?.().then(
+      () => console.log("[isotrope] background worker started (render and mail queues)"),
+      (error) => console.error(`[isotrope] the background worker could not start: ${error instanceof Error ? error.message : error}`),
+    );
+  }
   const stop = () => {
     server.close();
     server.closeIdleConnections();
+    void jobs.stopBackgroundWork?.();
     void mode.close?.();
     setTimeout(() => process.exit(0), 2000).unref();
   };

@@ -4,7 +4,7 @@ import { env } from "~/infra/env.server";
 
 const transport = nodemailer.createTransport(env.SMTP_URL);
 
-export type Mail = { to: string; subject: string; text: string; html?: string };
+export type Mail = { to: string; subject: string; text: string; html?: string; attachments?: { filename: string; content: Buffer; contentType: string }[] };
 
 export async function sendMail(mail: Mail) {
   await transport.sendMail({ from: env.MAIL_FROM, ...mail });

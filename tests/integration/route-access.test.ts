@@ -41,6 +41,7 @@ let siteId = "";
 let visitId = "";
 let photoId = "";
 let assessmentId = "";
+let documentId = "";
 
 
 const cases: Case[] = [
@@ -149,6 +150,16 @@ const cases: Case[] = [
   { file: "routes/api/v1/site-emitters-csv.ts", method: "action", path: () => `/api/v1/sites/${siteId}/emitters/csv`, json: {}, params: () => ({ siteId }), expect: apiRoles(inventoryEditors, "unsupported") },
   { file: "routes/api/v1/patterns.ts", method: "loader", path: () => "/api/v1/patterns", expect: apiRoles(staffRoles, "ok") },
   { file: "routes/api/v1/patterns.ts", method: "action", path: () => "/api/v1/patterns", json: {}, expect: apiRoles(inventoryEditors, "bad-request") },
+  { file: "routes/documents/site-documents.tsx", method: "loader", path: () => `/sites/${siteId}/documents`, params: () => ({ siteId }), expect: rolesIn(staffRoles, "ok") },
+  { file: "routes/documents/site-documents.tsx", method: "action", path: () => `/sites/${siteId}/documents`, form: {}, params: () => ({ siteId }), expect: rolesIn(inventoryEditors, "bad-request") },
+  { file: "routes/documents/document.tsx", method: "loader", path: () => `/sites/${siteId}/documents/${documentId}`, params: () => ({ siteId, documentId }), expect: rolesIn(staffRoles, "ok") },
+  { file: "routes/documents/document.tsx", method: "action", path: () => `/sites/${siteId}/documents/${documentId}`, form: {}, params: () => ({ siteId, documentId }), expect: rolesIn(inventoryEditors, "bad-request") },
+  // The fixture document is a draft with no PDF yet: staff get 409 (still being made); a client never sees drafts (404).
+  { file: "routes/documents/pdf.ts", method: "loader", path: () => `/documents/${documentId}/pdf`, params: () => ({ documentId }), expect: (a) => (a === "anonymous" ? "sign-in" : a === "regulator" ? "forbidden" : a === "client" ? "not-found" : "conflict") },
+  // Public: an unknown (or unissued) certificate code is 404 for everyone.
+  { file: "routes/verify.tsx", method: "loader", path: () => "/verify/ABCD-EFGH-JKLM-NPQR-STUV", params: () => ({ code: "ABCD-EFGH-JKLM-NPQR-STUV" }), expect: () => "not-found" },
+  { file: "routes/api/v1/documents.ts", method: "loader", path: () => "/api/v1/documents", expect: apiRoles([...staffRoles, "client"], "ok") },
+  { file: "routes/api/v1/document-pdf.ts", method: "loader", path: () => `/api/v1/documents/${documentId}/pdf`, params: () => ({ documentId }), expect: (a) => (a === "anonymous" ? "unauthorized" : a === "regulator" ? "forbidden" : a === "client" ? "not-found" : "conflict") },
   // Last: signing out revokes the fixture sessions.
   { file: "routes/auth/sign-out.ts", method: "action", path: () => "/sign-out", form: {}, expect: () => "signed-out" },
 ];
@@ -190,6 +201,8 @@ beforeAll(async () => {
     runs: [], summary: { worstPercent: 0, worstAt: null, emitters: [], areas: [] }, results: { surfaces: [], emitters: [] }, engine: "isotrope-engine/1", mitigation: emptyPlan,
   }).returning();
   assessmentId = frozen.id;
+  const [doc] = await db.insert(schema.document).values({ organizationId: org.id, siteId, assessmentId, kind: "report", authorName: "Fixture", code: `ROUTE-TABLE-${randomUUID()}` }).returning();
+  documentId = doc.id;
   invitationId = randomUUID();
   await db.insert(schema.invitation).values({
     id: invitationId, organizationId: org.id, email: `invitee-${invitationId}@fixture.test`, role: "engineer",

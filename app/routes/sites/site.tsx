@@ -24,6 +24,7 @@ const sections: { to: string; label: string; end?: boolean; also?: string }[] = 
   { to: "visits", label: "Visits" },
   { to: "exposure", label: "Exposure" },
   { to: "assessments", label: "Assessments" },
+  { to: "documents", label: "Documents" },
   { to: "history", label: "History" },
 ];
 

@@ -9,3 +9,4 @@ export * from "./visits";
 export * from "./tokens";
 export * from "./auth-throttle";
 export * from "./assessments";
+export * from "./documents";
