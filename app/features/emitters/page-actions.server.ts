@@ -1,7 +1,6 @@
 // What the Emitters section's forms do, by intent: add a row, save a row (with the version it was
 // opened at; a stale one answers 409 with the row as it now stands), delete a row. Each answers
 // `{ intent, result }` with Conform's reply, and `conflict` on a 409.
-import { parseWithZod } from "@conform-to/zod/v4";
 import { data } from "react-router";
 import type { Member } from "~/features/auth/guard.server";
 import { actorOf } from "~/features/sites/scope.server";
@@ -9,6 +8,7 @@ import { DomainError } from "~/lib/domain-error";
 import { valuesFromForm } from "./convert";
 import { createEmitter, deleteEmitter, updateEmitter } from "./emitters.server";
 import { emitterFormSchema } from "./schemas";
+import { parseForm } from "~/lib/form.server";
 
 export async function emittersPageAction(member: Member, siteId: string, formData: FormData) {
   const intent = String(formData.get("intent") ?? "");
@@ -24,7 +24,7 @@ export async function emittersPageAction(member: Member, siteId: string, formDat
     }
   }
   if (intent !== "add-emitter" && intent !== "save-emitter") return data({ intent, message: "That form is not known here. Reload the page." }, { status: 400 });
-  const submission = parseWithZod(formData, { schema: emitterFormSchema });
+  const submission = await parseForm(formData, emitterFormSchema);
   if (submission.status !== "success") return data({ intent, result: submission.reply() }, { status: 400 });
   const { id, version } = submission.value;
   try {

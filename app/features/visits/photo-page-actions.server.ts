@@ -1,5 +1,4 @@
 // What the photo page's forms do: change the caption, or delete the photo.
-import { parseWithZod } from "@conform-to/zod/v4";
 import { data } from "react-router";
 import type { Member } from "~/features/auth/guard.server";
 import { actorOf } from "~/features/sites/scope.server";
@@ -7,6 +6,7 @@ import { redirectWithFlash } from "~/infra/flash.server";
 import { DomainError, domainErrorReply } from "~/lib/domain-error";
 import { deletePhoto, updateCaption } from "./photos.server";
 import { captionSchema } from "./schemas";
+import { parseForm } from "~/lib/form.server";
 
 type Params = { siteId: string; visitId: string; photoId: string };
 
@@ -24,7 +24,7 @@ export async function photoPageAction(member: Member, params: Params, formData: 
     }
     return redirectWithFlash(visitPath, { kind: "success", message: "Photo deleted." });
   }
-  const submission = parseWithZod(formData, { schema: captionSchema });
+  const submission = await parseForm(formData, captionSchema);
   if (submission.status !== "success") return data(submission.reply(), { status: 400 });
   const { caption, version } = submission.value;
   if (!version) return data(submission.reply({ formErrors: ["The form is missing the version it was opened at. Reload the page."] }), { status: 400 });

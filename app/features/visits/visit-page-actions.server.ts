@@ -1,6 +1,5 @@
 // What the visit page's forms do, by intent: edit or delete the visit, add, edit or delete a
 // reading. Each answers as its form expects: a redirect with a flash, or Conform's reply.
-import { parseWithZod } from "@conform-to/zod/v4";
 import { data } from "react-router";
 import type { Member } from "~/features/auth/guard.server";
 import { actorOf } from "~/features/sites/scope.server";
@@ -10,6 +9,7 @@ import { resolveSurface, toNewReading } from "./readings-check";
 import { addReadings, deleteReading, ReadingsRefused, updateReading } from "./readings.server";
 import { readingFormSchema, visitFormSchema } from "./schemas";
 import { deleteVisit, updateVisit } from "./visits.server";
+import { parseForm } from "~/lib/form.server";
 
 type Params = { siteId: string; visitId: string };
 
@@ -40,7 +40,7 @@ export async function visitPageAction(member: Member, params: Params, formData: 
   }
 
   if (intent === "save-visit") {
-    const submission = parseWithZod(formData, { schema: visitFormSchema });
+    const submission = await parseForm(formData, visitFormSchema);
     if (submission.status !== "success") return data(submission.reply(), { status: 400 });
     const { version, ...fields } = submission.value;
     if (!version) return data(submission.reply({ formErrors: ["The form is missing the version it was opened at. Reload the page."] }), { status: 400 });
@@ -53,7 +53,7 @@ export async function visitPageAction(member: Member, params: Params, formData: 
   }
 
   if (intent === "add-reading" || intent === "edit-reading") {
-    const submission = parseWithZod(formData, { schema: readingFormSchema });
+    const submission = await parseForm(formData, readingFormSchema);
     if (submission.status !== "success") return data(submission.reply(), { status: 400 });
     const { id, version, ...reading } = submission.value;
     try {

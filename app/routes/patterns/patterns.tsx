@@ -1,4 +1,5 @@
 import { useMemo, useState } from "react";
+import { readFormData } from "~/lib/form.server";
 import { data, Link, useFetcher } from "react-router";
 import { Button } from "~/components/button";
 import { Card, EmptyState, PageHeader } from "~/components/panels";
@@ -24,7 +25,7 @@ export async function loader({ request, context }: Route.LoaderArgs) {
 
 export async function action({ request, context }: Route.ActionArgs) {
   const member = await requireMember({ request, context }, { roles: inventoryEditors });
-  const form = await request.formData();
+  const form = await readFormData(request);
   if (form.get("intent") !== "delete-pattern") return data({ ok: false, message: "That form is not known here. Reload the page.", sites: [] }, { status: 400 });
   try {
     await deletePattern(actorOf(member), String(form.get("id") ?? ""));

@@ -1,4 +1,5 @@
 import { useMemo, useState } from "react";
+import { readFormData } from "~/lib/form.server";
 import { Button } from "~/components/button";
 import { Card, EmptyState } from "~/components/panels";
 import { requireMember } from "~/features/auth/guard.server";
@@ -27,7 +28,7 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
 export async function action({ request, params, context }: Route.ActionArgs) {
   const member = await requireMember({ request, context }, { roles: inventoryEditors });
   found(await findSite(scopeOf(member), params.siteId), "No such site in your organisation.");
-  return emittersPageAction(member, params.siteId, await request.formData());
+  return emittersPageAction(member, params.siteId, await readFormData(request));
 }
 
 const newRow = { label: "", operator: "", band: "", frequencyMHz: "", power: "", powerUnit: "W", carriers: "1", lossDb: "0", gain: "", gainUnit: "dBi", patternChoice: "", azimuthDeg: "0", mechanicalTiltDeg: "0", electricalTiltDeg: "0", x: "0", y: "0", z: "0", model: "spherical", dutyFactor: "1", actualMaxFactor: "1", tddFactor: "1", active: "on", notes: "" };

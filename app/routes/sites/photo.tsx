@@ -1,4 +1,5 @@
 import { useState } from "react";
+import { readFormData } from "~/lib/form.server";
 import { Form, Link } from "react-router";
 import { Button } from "~/components/button";
 import { Dialog } from "~/components/dialog";
@@ -29,7 +30,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 
 export async function action({ request, params }: Route.ActionArgs) {
   const member = await requireMember(request, { roles: inventoryEditors });
-  return photoPageAction(member, params, await request.formData());
+  return photoPageAction(member, params, await readFormData(request));
 }
 
 export default function PhotoPage({ loaderData, actionData }: Route.ComponentProps) {

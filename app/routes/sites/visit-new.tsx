@@ -1,4 +1,4 @@
-import { parseWithZod } from "@conform-to/zod/v4";
+import { parseForm } from "~/lib/form.server";
 import { data } from "react-router";
 import { requireMember } from "~/features/auth/guard.server";
 import { actorOf, scopeOf } from "~/features/sites/scope.server";
@@ -22,7 +22,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 
 export async function action({ request, params }: Route.ActionArgs) {
   const member = await requireMember(request, { roles: inventoryEditors });
-  const submission = parseWithZod(await request.formData(), { schema: visitFormSchema });
+  const submission = await parseForm(request, visitFormSchema);
   if (submission.status !== "success") return data(submission.reply(), { status: 400 });
   const { version: _v, ...input } = submission.value;
   try {

@@ -1,4 +1,5 @@
 import { useState } from "react";
+import { readFormData } from "~/lib/form.server";
 import { Form, Link, useSearchParams, type ShouldRevalidateFunction } from "react-router";
 import { Button, ButtonLink } from "~/components/button";
 import { Dialog } from "~/components/dialog";
@@ -34,7 +35,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 
 export async function action({ request, params }: Route.ActionArgs) {
   const member = await requireMember(request, { roles: inventoryEditors });
-  return visitPageAction(member, params, await request.formData());
+  return visitPageAction(member, params, await readFormData(request));
 }
 
 /** After a refused stale edit (409) the page reloads its data, so the table shows what the other person saved. */
