@@ -21,18 +21,12 @@ export function assessmentListJson(row: AssessmentListRow) {
 }
 
 export function assessmentJson(row: AssessmentRow) {
+  const { summary, ...listed } = assessmentListJson(row);
   return {
-    id: row.id,
-    siteId: row.siteId,
-    name: row.name,
-    standard: row.standard,
-    tier: row.tier,
-    createdAt: row.createdAt.toISOString(),
-    author: author(row),
-    options: row.options,
+    ...listed,
     inventory: { ...row.site, ...row.inventory },
     runs: row.runs,
-    summary: row.summary,
+    summary,
     mitigation: { ...row.mitigation, version: row.mitigationVersion },
   };
 }
