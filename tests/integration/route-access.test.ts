@@ -160,6 +160,12 @@ const cases: Case[] = [
   { file: "routes/verify.tsx", method: "loader", path: () => "/verify/ABCD-EFGH-JKLM-NPQR-STUV", params: () => ({ code: "ABCD-EFGH-JKLM-NPQR-STUV" }), expect: () => "not-found" },
   { file: "routes/api/v1/documents.ts", method: "loader", path: () => "/api/v1/documents", expect: apiRoles([...staffRoles, "client"], "ok") },
   { file: "routes/api/v1/document-pdf.ts", method: "loader", path: () => `/api/v1/documents/${documentId}/pdf`, params: () => ({ documentId }), expect: (a) => (a === "anonymous" ? "unauthorized" : a === "regulator" ? "forbidden" : a === "client" ? "not-found" : "conflict") },
+  // Filings: the regulator reads its inbox, owner/engineer/reviewer the organisation's; only engineers and reviewers file. An unknown filing id is 404.
+  { file: "routes/filings/inbox.tsx", method: "loader", path: () => "/filings", expect: rolesIn(["owner", "engineer", "reviewer", "regulator"], "ok") },
+  { file: "routes/filings/inbox.tsx", method: "action", path: () => "/filings", form: {}, expect: rolesIn(["engineer", "reviewer"], "bad-request") },
+  { file: "routes/filings/bundle.ts", method: "loader", path: () => `/filings/${randomUUID()}/bundle`, params: () => ({ filingId: randomUUID() }), expect: rolesIn(["owner", "engineer", "reviewer", "regulator"], "not-found") },
+  { file: "routes/api/v1/filings.ts", method: "loader", path: () => "/api/v1/filings", expect: apiRoles(["owner", "engineer", "reviewer", "regulator"], "ok") },
+  { file: "routes/api/v1/filing-bundle.ts", method: "loader", path: () => `/api/v1/filings/${randomUUID()}/bundle`, params: () => ({ filingId: randomUUID() }), expect: apiRoles(["owner", "engineer", "reviewer", "regulator"], "not-found") },
   // Last: signing out revokes the fixture sessions.
   { file: "routes/auth/sign-out.ts", method: "action", path: () => "/sign-out", form: {}, expect: () => "signed-out" },
 ];
