@@ -12,6 +12,7 @@ import JSZip from "jszip";
 import { emittersToCsv } from "~/features/emitters/csv";
 import type { EmitterValues } from "~/features/emitters/convert";
 import { db, schema } from "~/infra/db.server";
+import { DomainError } from "~/lib/domain-error";
 import { methodMarkdown, type MethodSource } from "./method-md.server";
 
 type FilingRow = typeof schema.filing.$inferSelect;
@@ -37,7 +38,7 @@ export async function filingBundle(f: FilingRow): Promise<{ bytes: Buffer; name:
   const [a] = await db.select().from(schema.assessment).where(eq(schema.assessment.id, f.assessmentId));
   const [report] = await db.select().from(schema.document).where(eq(schema.document.id, f.documentId));
   const [org] = await db.select({ name: schema.organization.name }).from(schema.organization).where(eq(schema.organization.id, f.organizationId));
-  if (!report?.pdf) throw new Error(`Filing ${f.id}: its report has no stored PDF.`);
+  if (!report?.pdf) throw new DomainError("The filed report's PDF is still being made. Try again in a moment.", 409);
   const runs = await storedRuns(a.id);
   const source = a as unknown as MethodSource & { inventory: { emitters: InventoryEmitter[]; surfaces: { id: string; name: string }[] } };
   const surfaceNames = new Map(source.inventory.surfaces.map((s) => [s.id, s.name]));
