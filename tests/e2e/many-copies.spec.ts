@@ -11,7 +11,7 @@ import postgres from "postgres";
 import sharp from "sharp";
 import { demoPassword } from "./helpers";
 
-const ROOT = join(__dirname, "..", "..");
+const ROOT = join(import.meta.dirname, "..", "..");
 const A = process.env.APP_URL ?? "http://127.0.0.1:3100";
 const children: { name: string; child: ChildProcess; log: string[] }[] = [];
 
