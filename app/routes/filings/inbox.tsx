@@ -62,12 +62,12 @@ const column = createColumnHelper<Row>();
 const standardText = (standard: string, tier: string) => `${standardLabels[standard as StandardId] ?? standard}, ${tierLabels[standard as StandardId]?.[tier as Tier] ?? tier}`;
 
 const columns = [
-  column.accessor("filedAt", { header: "Filed", cell: (c) => <DateText value={c.getValue()} /> }),
+  column.accessor("filedAt", { header: "Filed", cell: (c) => <span className="whitespace-nowrap"><DateText value={c.getValue()} /></span> }),
   column.accessor("siteName", { header: "Site", cell: (c) => <span className="break-words">{c.getValue()}{c.row.original.city ? `, ${c.row.original.city}` : ""}</span> }),
   column.accessor("assessmentName", { header: "Assessment", cell: (c) => <span className="break-words">{c.getValue()}<span className="block text-xs text-graphite-600">{standardText(c.row.original.standard, c.row.original.tier)}</span></span> }),
   column.accessor("authority", { header: "Authority", cell: (c) => <span className="break-words">{c.getValue()}</span> }),
   column.accessor("filedByName", { header: "Filed by", cell: (c) => <span className="break-words">{c.getValue()}{c.row.original.note ? <span className="block text-xs text-graphite-600">{c.row.original.note}</span> : null}</span> }),
-  column.display({ id: "bundle", header: "Bundle", cell: (c) => <a className="link font-medium" href={`/filings/${c.row.original.id}/bundle`} download>Download ZIP</a> }),
+  column.display({ id: "bundle", header: "Bundle", cell: (c) => <a className="link whitespace-nowrap font-medium" href={`/filings/${c.row.original.id}/bundle`} download>Download ZIP</a> }),
 ];
 
 export default function Filings({ loaderData, actionData }: Route.ComponentProps) {
