@@ -106,6 +106,11 @@ describe("filing an issued assessment", () => {
     const audit = await db.select().from(schema.auditEvent).where(and(eq(schema.auditEvent.subjectType, "filing"), eq(schema.auditEvent.subjectId, row.id)));
     expect(audit).toHaveLength(1);
     expect(audit[0]).toMatchObject({ action: "filing.created", actorUserId: a.people.engineer.userId, siteId });
+    // The regulator is told by e-mail (a job on the mail queue, queued after the commit).
+    const mails = await db.execute<{ subject: string; text: string }>(sql`select data->>'subject' as subject, data->>'text' as text from pgboss.job where name = 'document-mail' and data->>'to' = ${a.people.regulator.email}`);
+    expect(mails).toHaveLength(1);
+    expect(mails[0].subject).toBe("Filed to you: Filing fixture roof, Filed baseline");
+    expect(mails[0].text).toMatch(/\/filings$/m);
     // The reviewer files the same assessment to the second regulator, naming the authority.
     expect((await file(a, "reviewer", { ...form, regulatorMemberId: reg2.memberId, authority: "Harbour Radio Board", note: "" })).status).toBe(302);
   });

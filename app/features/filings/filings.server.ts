@@ -2,11 +2,14 @@
 // owner, engineers and reviewers their organisation's), what may be filed (assessments whose
 // report is issued), and the filing itself (one transaction with its audit row).
 import { and, desc, eq, gte, inArray, lt, type SQL } from "drizzle-orm";
+import { queueMails } from "~/features/documents/jobs.server";
 import { db, schema } from "~/infra/db.server";
+import { env } from "~/infra/env.server";
 import { auditChange } from "~/lib/audit.server";
 import { DomainError } from "~/lib/domain-error";
 import type { Role } from "~/lib/roles";
 import { authorityFromName } from "./authority";
+import { filingMail } from "./mail";
 import type { FilingFilter } from "./schemas";
 
 const { filing, site, assessment, document, member, user } = schema;
@@ -104,8 +107,13 @@ export type Filer = { organizationId: string; userId: string; role: Role; name: 
 
 export async function fileAssessment(who: Filer, input: { assessmentId: string; regulatorMemberId: string; authority: string; note: string }) {
   if (!(filers as readonly Role[]).includes(who.role)) throw new DomainError("Only an engineer or a reviewing engineer files assessments.", 403);
-  return db.transaction(async (tx) => {
-    const [a] = await tx.select({ id: assessment.id, siteId: assessment.siteId }).from(assessment).where(and(eq(assessment.id, input.assessmentId), eq(assessment.organizationId, who.organizationId)));
+  const filed = await db.transaction(async (tx) => {
+    const [a] = await tx
+      .select({ id: assessment.id, siteId: assessment.siteId, name: assessment.name, siteName: site.name, organizationName: schema.organization.name })
+      .from(assessment)
+      .innerJoin(site, eq(site.id, assessment.siteId))
+      .innerJoin(schema.organization, eq(schema.organization.id, assessment.organizationId))
+      .where(and(eq(assessment.id, input.assessmentId), eq(assessment.organizationId, who.organizationId)));
     if (!a) throw new DomainError("No such assessment in your organisation.", 404, "assessmentId");
     const [report] = await tx
       .select({ id: document.id })
@@ -115,7 +123,7 @@ export async function fileAssessment(who: Filer, input: { assessmentId: string; 
       .limit(1);
     if (!report) throw new DomainError("Only an assessment whose report is issued can be filed.", 409, "assessmentId");
     const [reg] = await tx
-      .select({ id: member.id, name: user.name })
+      .select({ id: member.id, name: user.name, email: user.email })
       .from(member)
       .innerJoin(user, eq(user.id, member.userId))
       .where(and(eq(member.id, input.regulatorMemberId), eq(member.organizationId, who.organizationId), eq(member.role, "regulator")));
@@ -128,6 +136,9 @@ export async function fileAssessment(who: Filer, input: { assessmentId: string; 
       .values({ organizationId: who.organizationId, siteId: a.siteId, assessmentId: a.id, documentId: report.id, regulatorMemberId: reg.id, authority, note: input.note, filedByUserId: who.userId, filedByName: who.name })
       .returning();
     await auditChange(tx, who, { action: "filing.created", entity: "filing", entityId: row.id, siteId: a.siteId, before: null, after: { assessmentId: a.id, documentId: report.id, regulatorMemberId: reg.id, authority, note: input.note } });
-    return row;
+    return { row, mail: filingMail(reg.email, { siteName: a.siteName, assessmentName: a.name, authority, filerName: who.name, organizationName: a.organizationName, url: `${env.APP_URL.replace(/\/$/, "")}/filings` }) };
   });
+  // After the commit, like the documents' mails: the regulator hears of it by e-mail (the mail queue retries).
+  await queueMails([filed.mail]);
+  return filed.row;
 }
