@@ -2,6 +2,7 @@
 // with events, events), then stripe-stateful-mock's app (customers, products, prices, charges, refunds…).
 import express from "express";
 import { createRequire } from "node:module";
+import { catalogRoutes } from "./catalog-routes.mjs";
 import { checkoutRoutes } from "./checkout-routes.mjs";
 import { errorHandler } from "./errors.mjs";
 import { eventRoutes } from "./event-routes.mjs";
@@ -65,6 +66,7 @@ export function createFakeStripeApp(config) {
   ours.use(idempotency());
   ours.use(checkoutRoutes(state));
   ours.use(moneyRoutes(state));
+  ours.use(catalogRoutes());
   app.use(ours);
   app.use(errorHandler);
   app.use(createExpressApp());

@@ -199,6 +199,31 @@ describe("payment fake: Checkout Sessions", () => {
   });
 });
 
+describe("payment fake: products and prices for a price list", () => {
+  it("creates, renames and archives products and prices; filters by active and lookup key", async () => {
+    const tag = `t${Date.now()}${Math.random().toString(36).slice(2, 6)}`;
+    const product = await stripe.products.create({ name: "Certificate fee", metadata: { kind: "certificate" } });
+    expect(product.active).toBe(true);
+    const price = await stripe.prices.create({ product: product.id, currency: "eur", unit_amount: 12_000, lookup_key: `${tag}-certificate` });
+    expect(price).toMatchObject({ active: true, unit_amount: 12_000, currency: "eur", product: product.id, type: "one_time" });
+    expect((await stripe.prices.list({ lookup_keys: [`${tag}-certificate`] })).data.map((p) => p.id)).toEqual([price.id]);
+
+    const renamed = await stripe.products.update(product.id, { name: "Certificate of compliance", metadata: { version: "2" } });
+    expect(renamed).toMatchObject({ name: "Certificate of compliance", metadata: { kind: "certificate", version: "2" } });
+    const replacement = await stripe.prices.create({ product: product.id, currency: "eur", unit_amount: 13_000 });
+    await stripe.prices.update(price.id, { active: false });
+    const live = await stripe.prices.list({ product: product.id, active: true });
+    expect(live.data.map((p) => p.id)).toEqual([replacement.id]);
+
+    await stripe.products.update(product.id, { active: false });
+    const activeProducts = await stripe.products.list({ active: true, limit: 100 });
+    expect(activeProducts.data.map((p) => p.id)).not.toContain(product.id);
+    await expect(
+      stripe.checkout.sessions.create({ mode: "payment", success_url: "http://127.0.0.1:9/done", line_items: [{ price: price.id, quantity: 1 }] }),
+    ).rejects.toMatchObject({ statusCode: 400, param: "line_items[0][price]" });
+  });
+});
+
 describe("payment fake: paying, declining, cancelling, expiring", () => {
   it("pay: completes the session, posts a signed checkout.session.completed, redirects to success_url", async () => {
     const session = await newSession();
