@@ -9,6 +9,7 @@ import { eventRoutes } from "./event-routes.mjs";
 import { createEvents } from "./events.mjs";
 import { moneyRoutes } from "./money-routes.mjs";
 import { pageRoutes } from "./page-routes.mjs";
+import { allSessions } from "./sessions.mjs";
 
 const require = createRequire(import.meta.url);
 const { createExpressApp } = require("stripe-stateful-mock");
@@ -69,6 +70,8 @@ export function createFakeStripeApp(config) {
   ours.use(catalogRoutes());
   app.use(ours);
   app.use(errorHandler);
+  // Stripe expires sessions on its own at expires_at: look every 30 s (reads also expire them).
+  setInterval(() => allSessions(state), 30_000).unref();
   app.use(createExpressApp());
   return { app, state };
 }

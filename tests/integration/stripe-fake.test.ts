@@ -244,6 +244,8 @@ describe("payment fake: paying, declining, cancelling, expiring", () => {
 
     const stored = await stripe.checkout.sessions.retrieve(session.id);
     expect(stored).toMatchObject({ status: "complete", payment_status: "paid", payment_intent: completed.payment_intent, url: null });
+    const expanded = await stripe.checkout.sessions.retrieve(session.id, { expand: ["payment_intent.latest_charge"] });
+    expect(((expanded.payment_intent as Stripe.PaymentIntent).latest_charge as Stripe.Charge).amount).toBe(12_000);
 
     const intent = await stripe.paymentIntents.retrieve(completed.payment_intent as string);
     expect(intent).toMatchObject({ object: "payment_intent", status: "succeeded", amount: 12_000, amount_received: 12_000, currency: "eur" });
