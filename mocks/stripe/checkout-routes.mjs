@@ -34,7 +34,9 @@ export function checkoutRoutes(state) {
       if (req.query[key] !== undefined) data = data.filter((s) => s[key] === String(req.query[key]));
     }
     const list = paginate(data, req.query, "/v1/checkout/sessions", invalid);
-    list.data = list.data.map((s) => presentSession(state, s, req.query.expand));
+    // List expansions name the items' fields as `data.<field>`.
+    const expand = expandList(req.query.expand).map((name) => name.replace(/^data\./, ""));
+    list.data = list.data.map((s) => presentSession(state, s, expand));
     res.json(list);
   });
 

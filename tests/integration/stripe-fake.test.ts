@@ -181,6 +181,8 @@ describe("payment fake: Checkout Sessions", () => {
     const { session, paymentIntentId } = await paid();
     const list = await stripe.checkout.sessions.list({ payment_intent: paymentIntentId });
     expect(list.data.map((s) => s.id)).toEqual([session.id]);
+    const withItems = await stripe.checkout.sessions.list({ payment_intent: paymentIntentId, expand: ["data.line_items"] });
+    expect(withItems.data[0].line_items?.data[0].description).toBe("Compliance certificate");
     const recent = await stripe.checkout.sessions.list({ limit: 2 });
     expect(recent.data).toHaveLength(2);
     expect(recent.has_more).toBe(true);
