@@ -31,12 +31,12 @@ function requireKey(config) {
   };
 }
 
-/** Idempotency-Key on our POSTs: the same key and body replays the first answer; another body is a 400. */
+/** Idempotency-Key on API POSTs: the same key and body replays the first answer; another body is a 400. */
 function idempotency() {
   const seen = new Map();
   return (req, res, next) => {
     const key = req.get("idempotency-key");
-    if (req.method !== "POST" || !key || !(req.path.startsWith("/v1/checkout/") || req.path === "/v1/refunds")) return next();
+    if (req.method !== "POST" || !key) return next();
     const id = `${req.path}\n${key}`;
     const body = JSON.stringify(req.body ?? {});
     const stored = seen.get(id);
