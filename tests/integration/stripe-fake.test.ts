@@ -453,3 +453,34 @@ describe("payment fake: errors as Stripe's", () => {
     expect((await fetch(`${base}/checkout/pay/cs_test_missing`)).status).toBe(404);
   });
 });
+
+describe("payment fake: expiry at expires_at", () => {
+  it("expires an open session once its time has passed, posting checkout.session.expired", async () => {
+    // A second fake in this process, so that its clock can be moved forward.
+    const { createFakeStripeApp } = await import("../../mocks/stripe/app.mjs");
+    const { app } = createFakeStripeApp({ secretKey, webhookSecret, webhookUrl: receiverUrl, publicBase: "http://127.0.0.1:0", retryDelaysMs: [], redirectWaitMs: 0 });
+    const server = await new Promise<Server>((resolve) => {
+      const s = app.listen(0, "127.0.0.1", () => resolve(s));
+    });
+    const port = (server.address() as AddressInfo).port;
+    const local = new Stripe(secretKey, { host: "127.0.0.1", port, protocol: "http", maxNetworkRetries: 0 });
+    const realNow = Date.now;
+    try {
+      const session = await local.checkout.sessions.create({
+        mode: "payment",
+        success_url: "http://127.0.0.1:9/done",
+        line_items: [{ quantity: 1, price_data: { currency: "eur", unit_amount: 900, product_data: { name: "Soon gone" } } }],
+        expires_at: Math.floor(realNow() / 1000) + 31 * 60,
+      });
+      expect((await local.checkout.sessions.retrieve(session.id)).status).toBe("open");
+      Date.now = () => realNow() + 32 * 60 * 1000;
+      const later = await local.checkout.sessions.retrieve(session.id);
+      expect(later).toMatchObject({ status: "expired", url: null });
+      const [delivery] = await deliveries(forSession("checkout.session.expired", session.id));
+      expect(verify(delivery).type).toBe("checkout.session.expired");
+    } finally {
+      Date.now = realNow;
+      await new Promise((resolve) => server.close(resolve));
+    }
+  });
+});
