@@ -90,5 +90,6 @@ test("engineer drafts a letter, reviewer issues it, the client downloads it from
   // The e-mail to the client, with the letter attached.
   const mail = await latestMail(CLIENT, /^Issued: Letter to the property manager for Calloway House/, started);
   expect(mail.text).toContain(`/documents/${documentId}/pdf`);
+  expect(mail.text).toMatch(/\/portal\/sites\/[\w-]+/);
   expect((mail as unknown as { attachments?: { contentType: string }[] }).attachments?.[0]?.contentType).toBe("application/pdf");
 });

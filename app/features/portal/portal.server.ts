@@ -84,7 +84,8 @@ export async function portalSite(scope: Scope, siteId: string) {
     status,
     basis: latest ? basisOf(latest.assessment, latest.document) : null,
     maps: latest && status ? keepOutMaps(latest.assessment, status) : [],
-    documents: docs.map(documentOf),
+    // The newest of each kind is the one to rely on; earlier ones stay listed.
+    documents: docs.map((d, i) => ({ ...documentOf(d), latest: docs.findIndex((x) => x.kind === d.kind) === i })),
   };
 }
 

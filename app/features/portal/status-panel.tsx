@@ -8,6 +8,17 @@ import { classNames, type SiteStatus, type StatusBasis } from "./status";
 const percent = (v: number) => `${v >= 100 ? v.toFixed(0) : v >= 10 ? v.toFixed(1) : v.toFixed(2)} %`;
 const area = (m2: number) => `${m2 >= 10 ? m2.toFixed(0) : m2.toFixed(1)} m²`;
 
+/** ", mostly in the west part (25 m²), also the south part (1.3 m²) and 2 smaller patches". */
+function whereText(zones: SiteStatus["keepOut"][number]["zones"]) {
+  const named = zones.filter((z) => z.where);
+  if (!named.length) return "";
+  const [first, ...rest] = named;
+  const shown = rest.slice(0, 2).map((z) => `${z.where} (${area(z.areaM2)})`);
+  const more = rest.length - shown.length;
+  const also = [...shown, ...(more ? [`${more} smaller ${more === 1 ? "patch" : "patches"}`] : [])];
+  return `, ${rest.length ? "mostly " : ""}in ${first.where} (${area(first.areaM2)})${also.length ? `, also ${also.join(", ").replace(/, ([^,]*)$/, " and $1")}` : ""}`;
+}
+
 /** One short badge: a tick and "Compliant", or a triangle and the count of keep-out areas. */
 export function StatusBadge({ status }: { status: SiteStatus | null }) {
   if (!status) return <Notice state="info">No issued assessment yet</Notice>;
@@ -66,7 +77,7 @@ export function StatusDetail({ status }: { status: SiteStatus }) {
               {k.kind === "area" ? (
                 <>
                   <span className="figures">{area(k.overGeneralM2)}</span> above the public limit
-                  {k.zones.length ? `, in ${k.zones.map((z) => `${z.where} (${area(z.areaM2)})`).join(", ")}` : ""}; shaded on the map below.
+                  {whereText(k.zones)}; shaded on the map below.
                 </>
               ) : (
                 "Keep windows, balconies and platforms on this face closed to the public."

@@ -29,7 +29,11 @@ describe("siteStatus", () => {
       ] },
       inventory: { surfaces: [{ id: "s1", polygon: roof }, { id: "s2", polygon: [[10, 6], [16, 6], [16, 12], [10, 12]] }] },
       mitigation: {
-        zones: [{ id: "z1", surfaceId: "s1", surfaceName: "Main roof", worstClass: 2, areaM2: 40, centre: [27, 16], powerDown: { emitters: [] } as never }],
+        zones: [
+          { id: "z1", surfaceId: "s1", surfaceName: "Main roof", worstClass: 1, areaM2: 30, centre: [27, 16], powerDown: { emitters: [] } as never },
+          { id: "z2", surfaceId: "s1", surfaceName: "Main roof", worstClass: 2, areaM2: 6, centre: [4, 2], powerDown: { emitters: [] } as never },
+          { id: "z3", surfaceId: "s1", surfaceName: "Main roof", worstClass: 2, areaM2: 4, centre: [25, 14], powerDown: { emitters: [] } as never },
+        ],
         signs: [
           { id: "a1", category: "caution", x: 29, y: 1, z: 0, surfaceId: "s1", origin: "access-point", accessPointId: "p1", where: "Stair door (door), onto Main roof", note: "" },
           { id: "a2", category: "information", x: 1, y: 1, z: 0, surfaceId: "s1", origin: "access-point", accessPointId: "p2", where: "Fire exit (door), onto Main roof", note: "" },
@@ -40,7 +44,8 @@ describe("siteStatus", () => {
     expect(s.compliant).toBe(false);
     expect(s.classesPresent).toEqual([0, 1, 2, 3]);
     expect(s.keepOut.map((k) => [k.name, k.worstClass, k.overGeneralM2])).toEqual([["Penthouse top", 3, 8], ["Main roof", 2, 40]]);
-    expect(s.keepOut[1].zones).toEqual([{ areaM2: 40, worstClass: 2, where: "the north-east part" }]);
+    // Two zones in the north-east third read as one place.
+    expect(s.keepOut[1].zones).toEqual([{ areaM2: 34, worstClass: 2, where: "the north-east part" }, { areaM2: 6, worstClass: 2, where: "the south-west part" }]);
     expect(s.keepOut[0].rule).toMatch(/Keep everyone out while the antennas transmit/);
     // Only the access points whose sign asks for control; the optional INFORMATION sign's door stays open.
     expect(s.lockedAccess).toEqual(["Stair door"]);

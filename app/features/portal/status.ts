@@ -48,9 +48,14 @@ export function siteStatus(a: StatusSource): SiteStatus {
     .filter((s) => s.worstClass > 0)
     .map((s): KeepOut => {
       const polygon = a.inventory.surfaces.find((x) => x.id === s.surfaceId)?.polygon ?? null;
-      const zones = a.mitigation.zones
-        .filter((z) => z.surfaceId === s.surfaceId)
-        .map((z) => ({ areaM2: z.areaM2, worstClass: z.worstClass, where: polygon ? partOf(polygon, z.centre) : "" }));
+      // Zones in the same part of the surface read as one place: summed, largest first.
+      const byPart = new Map<string, KeepOutZone>();
+      for (const z of a.mitigation.zones.filter((x) => x.surfaceId === s.surfaceId)) {
+        const where = polygon ? partOf(polygon, z.centre) : "";
+        const had = byPart.get(where);
+        byPart.set(where, { where, areaM2: (had?.areaM2 ?? 0) + z.areaM2, worstClass: Math.max(had?.worstClass ?? 0, z.worstClass) });
+      }
+      const zones = [...byPart.values()].sort((x, y) => y.areaM2 - x.areaM2);
       return { surfaceId: s.surfaceId, name: s.name, kind: s.kind, worstClass: s.worstClass, worstPercent: s.worstPercent, overGeneralM2: s.areas.overGeneralM2, rule: classRules[s.worstClass], zones };
     })
     .sort((x, y) => y.worstClass - x.worstClass || y.overGeneralM2 - x.overGeneralM2);

@@ -69,6 +69,7 @@ export default function PortalSite({ loaderData }: Route.ComponentProps) {
                   <div className="min-w-0">
                     <p className="font-medium text-ink-900">
                       {kindLabels[d.kind]}, version {d.version}
+                      {d.latest ? null : <span className="ml-2 text-sm font-normal text-graphite-600">(an earlier one)</span>}
                     </p>
                     <p className="text-sm text-graphite-600">
                       {d.issuedAt ? (
