@@ -10,6 +10,9 @@ import * as overview from "~/routes/overview";
 import * as portalHome from "~/routes/portal/home";
 import * as portalSite from "~/routes/portal/site";
 import * as pdfRoute from "~/routes/documents/pdf";
+import * as documentsApi from "~/routes/api/v1/documents";
+import * as documentPdfApi from "~/routes/api/v1/document-pdf";
+import { callApi } from "./api-client";
 import * as sitesList from "~/routes/sites/list";
 import * as siteLayout from "~/routes/sites/site";
 import * as clientsList from "~/routes/clients/list";
@@ -112,6 +115,18 @@ describe("the portal pages", () => {
     expect(ok.headers.get("content-type")).toBe("application/pdf");
     expect(ok.headers.get("content-disposition")).toMatch(/^attachment;/);
     expect((await pdf(ids.letter, "?view=inline")).headers.get("content-disposition")).toMatch(/^inline;/);
+    for (const id of [ids.draft, ids.inReview, ids.theirs, ids.foreign]) expect((await pdf(id)).status, id).toBe(404);
+  });
+
+  it("and the API agree: GET /api/v1/documents lists the client's issued documents only, and their PDFs alone download", async () => {
+    const listed = await callApi(documentsApi, "GET", "/api/v1/documents", { auth: { cookie: asClient() } });
+    expect(listed.status).toBe(200);
+    expect(listed.body.documents.map((d: { id: string }) => d.id)).toEqual([ids.letter]);
+    for (const query of [`?siteId=${theirs}`, `?siteId=${foreign}`, "?state=draft", "?state=in_review"]) {
+      expect((await callApi(documentsApi, "GET", `/api/v1/documents${query}`, { auth: { cookie: asClient() } })).body.documents, query).toEqual([]);
+    }
+    const pdf = (documentId: string) => documentPdfApi.loader({ request: makeRequest(`/api/v1/documents/${documentId}/pdf`, { cookie: asClient() }), params: { documentId }, context: {} } as never) as Promise<Response>;
+    expect((await pdf(ids.letter)).status).toBe(200);
     for (const id of [ids.draft, ids.inReview, ids.theirs, ids.foreign]) expect((await pdf(id)).status, id).toBe(404);
   });
 
