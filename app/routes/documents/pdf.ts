@@ -12,16 +12,15 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   const member = await requireMember({ request, context }, { roles: readers });
   try {
     const { doc, pdf, sha256 } = await documentPdf(scopeOf(member), params.documentId);
-    // ?view=inline opens it in the browser's viewer; otherwise it downloads.
-    return pdfResponse(pdf, sha256, pdfFileName(doc), new URL(request.url).searchParams.get("view") === "inline");
+    return pdfResponse(pdf, sha256, pdfFileName(doc));
   } catch (error) {
     if (error instanceof DomainError) return new Response(error.message, { status: error.status, headers: { "content-type": "text/plain; charset=utf-8" } });
     throw error;
   }
 }
 
-export function pdfResponse(pdf: Buffer, sha256: string, name: string, inline = false) {
+export function pdfResponse(pdf: Buffer, sha256: string, name: string) {
   return new Response(new Uint8Array(pdf), {
-    headers: { "content-type": "application/pdf", "content-length": String(pdf.length), "content-disposition": `${inline ? "inline" : "attachment"}; filename="${name}"`, etag: `"${sha256}"`, "cache-control": "private, no-cache" },
+    headers: { "content-type": "application/pdf", "content-length": String(pdf.length), "content-disposition": `attachment; filename="${name}"`, etag: `"${sha256}"`, "cache-control": "private, no-cache" },
   });
 }

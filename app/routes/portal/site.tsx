@@ -88,10 +88,7 @@ export default function PortalSite({ loaderData }: Route.ComponentProps) {
                       ) : null}
                     </p>
                   </div>
-                  <div className="flex gap-4 text-sm">
-                    <a className="link" href={`/documents/${d.id}/pdf?view=inline`} target="_blank" rel="noreferrer">
-                      View
-                    </a>
+                  <div className="text-sm">
                     <a className="link" href={`/documents/${d.id}/pdf`} download>
                       Download PDF
                     </a>
