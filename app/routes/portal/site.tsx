@@ -1,5 +1,5 @@
 // /portal/sites/:siteId: one of the client's sites: where not to go (from the latest issued
-// assessment, with a map of the keep-out areas), and every issued document to view or download.
+// assessment, with a map of the keep-out areas), and every issued document to download.
 // Another client's or organisation's site is 404; drafts never show.
 import { RfCautions } from "~/components/cautions";
 import { DateText } from "~/components/date-text";
