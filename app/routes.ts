@@ -46,6 +46,10 @@ export default [
     ]),
     route("history", "routes/history/organization.tsx"),
     route("patterns", "routes/patterns/patterns.tsx"),
+    ...prefix("portal", [
+      index("routes/portal/home.tsx"),
+      route("sites/:siteId", "routes/portal/site.tsx"),
+    ]),
     route("filings", "routes/filings/inbox.tsx"),
     // Unknown addresses: the 404 inside the shell, with navigation when signed in.
     route("*", "routes/not-found.tsx"),

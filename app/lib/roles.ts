@@ -1,4 +1,6 @@
 // The roles of DESIGN.md §2 and what each may open. Shared by server and browser.
+import { portalNav, type PortalNavItem } from "./portal-nav";
+
 export const roles = ["owner", "engineer", "reviewer", "billing", "client", "regulator"] as const;
 export type Role = (typeof roles)[number];
 
@@ -36,7 +38,8 @@ export const sections = {
   account: { path: "/account", label: "Account", roles: roles },
 } as const satisfies Record<string, { path: string; label: string; roles: readonly Role[] }>;
 
-/** The sections a role may open, in navigation order. */
-export function sectionsFor(role: Role) {
+/** The sections a role may open, in navigation order; a client member gets the portal's own list. */
+export function sectionsFor(role: Role): readonly PortalNavItem[] {
+  if (role === "client") return portalNav;
   return Object.values(sections).filter((s) => (s.roles as readonly Role[]).includes(role));
 }

@@ -7,12 +7,16 @@ import { teamCounts } from "~/features/members/members.server";
 import { guideFor } from "~/features/overview/guide";
 import { roleLabels, staffRoles } from "~/lib/roles";
 import { inventoryCounts } from "~/features/sites/counts.server";
+import { PORTAL_HOME } from "~/lib/portal-nav";
+import { redirect } from "react-router";
 import type { Route } from "./+types/overview";
 
 export const meta: Route.MetaFunction = () => [{ title: "Overview · Isotrope" }];
 
 export async function loader(args: Route.LoaderArgs) {
   const member = await requireMember(args);
+  // A landlord's home is the client portal.
+  if (member.role === "client") throw redirect(PORTAL_HOME);
   const staff = (staffRoles as readonly string[]).includes(member.role);
   const [team, inventory] = await Promise.all([
     member.role === "owner" ? teamCounts(member.organizationId) : null,

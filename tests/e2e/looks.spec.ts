@@ -102,6 +102,12 @@ for (const viewport of widths) {
       for (const role of ["owner", "engineer", "reviewer", "billing", "client", "regulator"]) {
         const page = await signedInPage(browser, viewport, `${role}@demo.isotrope.test`);
         await look(page, info, `overview-${role}`);
+        if (role === "client") {
+          // A client's home is the portal; its site page has the keep-out map.
+          await page.getByRole("link", { name: "Calloway House" }).first().click();
+          await expect(page.getByRole("heading", { name: "Calloway House", level: 1 })).toBeVisible();
+          await look(page, info, "portal-site");
+        }
         if (role === "regulator" || role === "engineer") {
           await visit(page, "/filings");
           await expect(page.getByRole("heading", { level: 1, name: role === "regulator" ? "Filings received" : "Filings" })).toBeVisible();

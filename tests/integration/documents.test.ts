@@ -10,6 +10,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { and, eq, sql } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { evaluate, type EvaluationRequestInput } from "~/engine";
 import { freezeAssessment } from "~/features/assessments/freeze.server";
 import { MAIL_QUEUE, mailJob, RENDER_QUEUE, renderJob } from "~/features/documents/jobs.server";
 import { announceIssued } from "~/features/documents/commands.server";
@@ -34,6 +35,7 @@ let b: Org;
 let siteId = "";
 let assessment: typeof schema.assessment.$inferSelect;
 const docs: Record<string, string> = {};
+let r2Predicted = 0;
 
 const as = (org: Org, role: keyof Org["people"]): Auth => ({ cookie: org.people[role].cookie });
 const list = (query = "", auth: Auth = as(a, "engineer")) => callApi(documentsApi, "GET", `/api/v1/documents${query}`, { auth });
@@ -78,6 +80,11 @@ beforeAll(async () => {
   const [visit] = await db.insert(schema.visit).values({ organizationId: a.id, siteId, visitedOn: "2026-05-01" }).returning();
   const surfaceId = (assessment.runs as { surfaceId: string }[])[0].surfaceId;
   await db.insert(schema.reading).values({ organizationId: a.id, visitId: visit.id, surfaceId, label: "R1", x: 15, y: 10, heightM: 1.5, value: 900, unit: "percent", percentStandard: "fcc", percentTier: "general", powerDensityWm2: null, createdAt: new Date(assessment.createdAt.getTime() - 1000) });
+  // A reading in FX-1's beam at its own height, 90 % of the prediction at that point: above the 0–2 m
+  // average the map shows there, but not above its prediction, so not called out (as the Exposure page compares).
+  const emitters = (assessment.runs as { request: EvaluationRequestInput }[])[0].request.emitters;
+  r2Predicted = evaluate({ standard: "fcc", tier: "general", emitters, points: [{ x: 5, y: 6, z: 2 }] }).points![0].totalPercent;
+  await db.insert(schema.reading).values({ organizationId: a.id, visitId: visit.id, surfaceId, label: "R2", x: 5, y: 6, heightM: 2, value: Number((0.9 * r2Predicted).toPrecision(6)), unit: "percent", percentStandard: "fcc", percentTier: "general", powerDensityWm2: null, createdAt: new Date(assessment.createdAt.getTime() - 1000) });
 }, 120_000);
 
 afterAll(async () => {
@@ -115,6 +122,11 @@ describe("the PDFs", () => {
     expect(text).toContain(areaText(results.surfaces[0].areas.overGeneralM2));
     // The reading of 900 % stands above its prediction and is called out.
     expect(text).toMatch(/R1 \(2026-05-01\)[\s\S]*ABOVE/);
+    // R2 is compared with the prediction at its own point and height, which it stays below.
+    const r2 = text.split("\n").find((l) => l.includes("R2 (2026-05-01)"))!;
+    expect(r2).toContain(percentText(r2Predicted));
+    expect(r2).not.toContain("ABOVE");
+    expect(text).toContain("1 reading is above the prediction at its own point and height");
     for (const g of ["π", "²", "µ", "°", "≤", "≥", "±", "η", "Ω", "Σ"]) expect(text, g).toContain(g);
     // The version and code on every page.
     const n = pages(d.pdf!);

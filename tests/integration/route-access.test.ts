@@ -12,7 +12,7 @@ const modules: Record<string, Record<string, unknown>> = Object.fromEntries(
 );
 
 type Actor = "anonymous" | Role;
-type Expect = "ok" | "sign-in" | "forbidden" | "home" | "unauthorized" | "not-found" | "signed-out" | "bad-request" | "conflict" | "unsupported";
+type Expect = "ok" | "sign-in" | "forbidden" | "home" | "portal" | "unauthorized" | "not-found" | "signed-out" | "bad-request" | "conflict" | "unsupported";
 type Handler = (args: { request: Request; params: Record<string, string>; context: unknown }) => unknown;
 type Case = {
   file: string;
@@ -45,7 +45,8 @@ let documentId = "";
 
 
 const cases: Case[] = [
-  { file: "routes/overview.tsx", method: "loader", path: () => "/", expect: (a) => staff(a, "ok") },
+  // A client member's home is the portal.
+  { file: "routes/overview.tsx", method: "loader", path: () => "/", expect: (a) => (a === "client" ? "portal" : staff(a, "ok")) },
   { file: "routes/account/account.tsx", method: "loader", path: () => "/account", expect: (a) => staff(a, "ok") },
   { file: "routes/account/account.tsx", method: "action", path: () => "/account", form: {}, expect: (a) => staff(a, "bad-request") },
   { file: "routes/members/members.tsx", method: "loader", path: () => "/members", expect: (a) => ownerOnly(a, "ok") },
@@ -160,6 +161,9 @@ const cases: Case[] = [
   { file: "routes/verify.tsx", method: "loader", path: () => "/verify/ABCD-EFGH-JKLM-NPQR-STUV", params: () => ({ code: "ABCD-EFGH-JKLM-NPQR-STUV" }), expect: () => "not-found" },
   { file: "routes/api/v1/documents.ts", method: "loader", path: () => "/api/v1/documents", expect: apiRoles([...staffRoles, "client"], "ok") },
   { file: "routes/api/v1/document-pdf.ts", method: "loader", path: () => `/api/v1/documents/${documentId}/pdf`, params: () => ({ documentId }), expect: (a) => (a === "anonymous" ? "unauthorized" : a === "regulator" ? "forbidden" : a === "client" ? "not-found" : "conflict") },
+  // The client portal: client members only. The fixture client member is bound to no client, so any site is 404 to it.
+  { file: "routes/portal/home.tsx", method: "loader", path: () => "/portal", expect: rolesIn(["client"], "ok") },
+  { file: "routes/portal/site.tsx", method: "loader", path: () => `/portal/sites/${siteId}`, params: () => ({ siteId }), expect: rolesIn(["client"], "not-found") },
   // Filings: the regulator reads its inbox, owner/engineer/reviewer the organisation's; only engineers and reviewers file. An unknown filing id is 404.
   { file: "routes/filings/inbox.tsx", method: "loader", path: () => "/filings", expect: rolesIn(["owner", "engineer", "reviewer", "regulator"], "ok") },
   { file: "routes/filings/inbox.tsx", method: "action", path: () => "/filings", form: {}, expect: rolesIn(["engineer", "reviewer"], "bad-request") },
@@ -178,6 +182,7 @@ function matches(expected: Expect, got: { status: number; location?: string }) {
     case "ok": return got.status === 200;
     case "sign-in": return got.status === 302 && got.location?.startsWith("/sign-in") === true;
     case "home": return got.status === 302 && got.location === "/";
+    case "portal": return got.status === 302 && got.location === "/portal";
     case "signed-out": return got.status === 302 && got.location === "/sign-in";
     case "forbidden": return got.status === 403;
     case "unauthorized": return got.status === 401;

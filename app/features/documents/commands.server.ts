@@ -120,9 +120,11 @@ export async function announceIssued(documentId: string) {
   if (!clients.length) return;
   const name = await siteName(d.siteId);
   const attach = d.kind !== "report";
-  // Clients open the PDF itself (their portal's pages come later, issue 9 §4).
-  const pdfUrl = `${env.APP_URL.replace(/\/$/, "")}/documents/${d.id}/pdf`;
-  await queueMails(clients.map((to) => ({ ...documentMail("issued", to, { kind: d.kind, version: d.version, siteName: name, url: pdfUrl, actorName: who.name, forClient: true }), ...(attach ? { attachDocumentId: d.id, attachName: `${d.kind}-v${d.version}-${d.code}.pdf` } : {}) })));
+  // Clients open the PDF itself, and the site's page on their portal.
+  const base = env.APP_URL.replace(/\/$/, "");
+  const pdfUrl = `${base}/documents/${d.id}/pdf`;
+  const portalUrl = `${base}/portal/sites/${d.siteId}`;
+  await queueMails(clients.map((to) => ({ ...documentMail("issued", to, { kind: d.kind, version: d.version, siteName: name, url: pdfUrl, portalUrl, actorName: who.name, forClient: true }), ...(attach ? { attachDocumentId: d.id, attachName: `${d.kind}-v${d.version}-${d.code}.pdf` } : {}) })));
 }
 
 export async function withdrawDocument(who: Who, id: string, reason: string) {

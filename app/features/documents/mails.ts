@@ -5,7 +5,7 @@ import type { DocumentKind } from "~/infra/db/schema/documents";
 
 export type DocumentMail = { to: string; subject: string; text: string; html: string; attachDocumentId?: string; attachName?: string };
 export type MailEvent = "submitted" | "returned" | "issued" | "withdrawn";
-type Facts = { kind: DocumentKind; version: number; siteName: string; url: string; actorName: string; reason?: string; forClient?: boolean };
+type Facts = { kind: DocumentKind; version: number; siteName: string; url: string; actorName: string; reason?: string; forClient?: boolean; portalUrl?: string };
 
 const escape = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
 
@@ -21,7 +21,8 @@ export function documentMail(event: MailEvent, to: string, f: Facts): Omit<Docum
   };
   const subjects: Record<MailEvent, string> = { submitted: "Ready for review", returned: "Returned to draft", issued: "Issued", withdrawn: "Withdrawn" };
   const body = lines[event];
-  const text = [...body, "", `Open it: ${f.url}`, "", "— Isotrope"].join("\n");
-  const html = body.map((l) => `<p>${escape(l)}</p>`).join("") + `<p><a href="${escape(f.url)}">Open the document</a></p><p>— Isotrope</p>`;
+  const portal = f.portalUrl ? { text: ["", `The site's status and every issued document: ${f.portalUrl}`], html: `<p><a href="${escape(f.portalUrl)}">The site's status and every issued document</a></p>` } : { text: [], html: "" };
+  const text = [...body, "", `Open it: ${f.url}`, ...portal.text, "", "— Isotrope"].join("\n");
+  const html = body.map((l) => `<p>${escape(l)}</p>`).join("") + `<p><a href="${escape(f.url)}">Open the document</a></p>${portal.html}<p>— Isotrope</p>`;
   return { to, subject: `${subjects[event]}: ${title}`, text, html };
 }

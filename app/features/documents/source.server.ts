@@ -32,6 +32,6 @@ export async function loadSource(doc: DocumentRow): Promise<DocumentSource> {
     expiresAt: doc.expiresAt,
     verifyUrl: verifyUrl(doc.code),
     assessment: row as unknown as SourceAssessment,
-    readings: readings.map(({ r, visitedOn }) => ({ label: r.label || "—", surfaceId: r.surfaceId, x: r.x, y: r.y, heightM: r.heightM, value: r.value, unit: r.unit, powerDensityWm2: r.powerDensityWm2, percentStandard: r.percentStandard, frequencyMHz: r.frequencyMHz, visitedOn: String(visitedOn) })),
+    readings: readings.map(({ r, visitedOn }) => ({ id: r.id, visitId: r.visitId, label: r.label || "—", surfaceId: r.surfaceId, x: r.x, y: r.y, heightM: r.heightM, value: r.value, unit: r.unit, powerDensityWm2: r.powerDensityWm2, percentStandard: r.percentStandard, percentTier: r.percentTier, frequencyMHz: r.frequencyMHz, visitedOn: String(visitedOn) })),
   };
 }

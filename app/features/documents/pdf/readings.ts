@@ -1,38 +1,27 @@
-// Readings set beside the predictions at the same place (pure). A reading in % of a standard keeps
-// its %; otherwise its power density is taken against the limit at its frequency, or, for a
-// broadband reading, against the lowest limit among the site's frequencies (the conservative
-// choice: a broadband probe cannot tell the frequencies apart; common practice, no source).
-import { powerDensityLimitWm2, type StandardId, type Tier } from "~/engine/limits";
+// Readings set beside the predictions, compared the way the Exposure page compares them
+// (features/exposure/readings.ts, `readingsOf`): each reading against the engine's prediction at the
+// reading's own point and height (its surface's elevation plus its height above it), from the frozen
+// assessment's own engine emitters. Not against the grid cell's value, which is a spatial average
+// over 0–2 m (or a maximum over the heights) and says nothing of one height in a beam. Pure.
+import { evaluate, type EmitterInput } from "~/engine";
+import { compareReadings, readingsRequest, type ReadingComparison, type SiteReading } from "~/features/exposure/readings";
+import type { LayoutSurface } from "~/features/exposure/requests";
 import type { SourceAssessment, SourceReading } from "./source";
 
-export type ReadingRow = SourceReading & { percent: number | null; predicted: number | null; above: boolean };
+export type ReadingRow = SourceReading & { percent: number | null; predicted: number; above: boolean; basis: ReadingComparison["basis"] };
 
-export function readingRows(a: Pick<SourceAssessment, "standard" | "tier" | "runs" | "inventory">, readings: SourceReading[]): ReadingRow[] {
-  const standard = a.standard as StandardId;
-  const tier = a.tier as Tier;
-  const limits = a.inventory.emitters.filter((e) => e.active).map((e) => powerDensityLimitWm2(standard, tier, e.frequencyMHz));
-  const lowest = limits.length ? Math.min(...limits) : null;
-  return readings.map((r) => {
-    let percent: number | null = null;
-    if (r.unit === "percent" && (!r.percentStandard || r.percentStandard === standard)) percent = r.value;
-    else if (r.powerDensityWm2 !== null) {
-      const limit = r.frequencyMHz ? powerDensityLimitWm2(standard, tier, r.frequencyMHz) : lowest;
-      percent = limit ? (100 * r.powerDensityWm2) / limit : null;
-    }
-    const predicted = predictionAt(a.runs, r);
-    return { ...r, percent, predicted, above: percent !== null && predicted !== null && percent > predicted };
-  });
+/** The engine emitters the assessment ran with (each run names them; the same emitter in several runs once). */
+export function frozenEmitters(runs: SourceAssessment["runs"]): EmitterInput[] {
+  const byId = new Map<string, EmitterInput>();
+  for (const run of runs) for (const e of (run.request.emitters ?? []) as EmitterInput[]) if (!byId.has(e.id)) byId.set(e.id, e);
+  return [...byId.values()];
 }
 
-/** The value of the grid cell holding (x, y) on the reading's surface, or null off the grids. */
-export function predictionAt(runs: SourceAssessment["runs"], r: { surfaceId: string | null; x: number; y: number }): number | null {
-  const run = runs.find((x) => x.surfaceId === r.surfaceId && x.response.grid);
-  const g = run?.response.grid;
-  if (!g) return null;
-  const i = Math.round((r.x - g.x0) / g.step);
-  const j = Math.round((r.y - g.y0) / g.step);
-  if (i < 0 || j < 0 || i >= g.nx || j >= g.ny) return null;
-  const k = j * g.nx + i;
-  if (g.mask && !g.mask[k]) return null;
-  return g.percent[k];
+export function readingRows(a: Pick<SourceAssessment, "options" | "runs" | "inventory">, readings: SourceReading[]): ReadingRow[] {
+  if (readings.length === 0) return [];
+  const surfaces: LayoutSurface[] = a.inventory.surfaces.map((s) => ({ id: s.id, name: s.name, kind: s.kind, polygon: s.polygon ?? null, line: null, elevationM: s.elevationM ?? null, bottomM: null, topM: null, access: s.access as LayoutSurface["access"] }));
+  const site: SiteReading[] = readings.map((r) => ({ id: r.id, label: r.label, visitId: r.visitId, visitedOn: r.visitedOn, surfaceId: r.surfaceId, x: r.x, y: r.y, heightM: r.heightM, value: r.value, unit: r.unit, frequencyMHz: r.frequencyMHz, powerDensityWm2: r.powerDensityWm2, percentStandard: r.percentStandard, percentTier: r.percentTier }));
+  const request = readingsRequest(site, surfaces, frozenEmitters(a.runs), a.options);
+  const { rows } = compareReadings(site, surfaces, request ? evaluate(request) : null, a.options);
+  return readings.map((r, i) => ({ ...r, percent: rows[i].measuredPercent, predicted: rows[i].predictedPercent, above: rows[i].abovePrediction, basis: rows[i].basis }));
 }

@@ -29,7 +29,7 @@ export type SourceAssessment = {
   mitigation: MitigationPlan;
 };
 
-export type SourceReading = { label: string; surfaceId: string | null; x: number; y: number; heightM: number; value: number; unit: string; powerDensityWm2: number | null; percentStandard: string | null; frequencyMHz: number | null; visitedOn: string };
+export type SourceReading = { id: string; visitId: string; label: string; surfaceId: string | null; x: number; y: number; heightM: number; value: number; unit: string; powerDensityWm2: number | null; percentStandard: string | null; percentTier: string | null; frequencyMHz: number | null; visitedOn: string };
 
 export type DocumentSource = {
   kind: DocumentKind;
