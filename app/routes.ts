@@ -50,12 +50,14 @@ export default [
       index("routes/portal/home.tsx"),
       route("sites/:siteId", "routes/portal/site.tsx"),
     ]),
+    route("filings", "routes/filings/inbox.tsx"),
     // Unknown addresses: the 404 inside the shell, with navigation when signed in.
     route("*", "routes/not-found.tsx"),
   ]),
   route("files/:fileId", "routes/files/file.ts"),
   route("documents/:documentId/pdf", "routes/documents/pdf.ts"),
   route("verify/:code", "routes/verify.tsx"),
+  route("filings/:filingId/bundle", "routes/filings/bundle.ts"),
   route("sign-out", "routes/auth/sign-out.ts"),
   ...prefix("api", [
     route("auth/*", "routes/api/auth.ts"),
@@ -81,5 +83,7 @@ export default [
     route("v1/assessments/:a/compare/:b", "routes/api/v1/assessment-compare.ts"),
     route("v1/documents", "routes/api/v1/documents.ts"),
     route("v1/documents/:documentId/pdf", "routes/api/v1/document-pdf.ts"),
+    route("v1/filings", "routes/api/v1/filings.ts"),
+    route("v1/filings/:filingId/bundle", "routes/api/v1/filing-bundle.ts"),
   ]),
 ] satisfies RouteConfig;

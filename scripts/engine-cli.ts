@@ -5,6 +5,7 @@
  * engine code. Bundled by scripts/engine-build.mjs; run via scripts/evaluate.mjs.
  */
 import { readFileSync } from "node:fs";
+import { resolve } from "node:path";
 import { availableParallelism } from "node:os";
 import { Worker } from "node:worker_threads";
 import { EngineInputError } from "../app/engine/errors";
@@ -48,7 +49,9 @@ async function main(): Promise<void> {
   const stop = () => workers.forEach((w) => void w.terminate());
   let text: string;
   try {
-    text = readFileSync(src === "-" ? 0 : src, "utf8");
+    // npm runs scripts in the package's folder; a relative path means the folder npm was called from (INIT_CWD),
+    // so `npm run -s evaluate -- runs/1/request.json` works inside an unzipped filing bundle.
+    text = readFileSync(src === "-" ? 0 : resolve(process.env.INIT_CWD ?? process.cwd(), src), "utf8");
   } catch (e) {
     stop();
     fail(`input: cannot read ${src === "-" ? "stdin" : src}: ${(e as Error).message}`);

@@ -5,6 +5,7 @@ import { auth } from "../app/features/auth/auth.server";
 import { db, schema, sql } from "../app/infra/db.server";
 import type { Role } from "../app/lib/roles";
 import { seedDocuments } from "./demo/documents";
+import { seedFilings } from "./demo/filings";
 import { seedInventory } from "./demo/inventory";
 
 const password = process.env.DEMO_PASSWORD ?? "isotrope-demo";
@@ -55,6 +56,7 @@ async function main() {
     }
   });
   await seedDocuments(mainOrganizationId);
+  await seedFilings(mainOrganizationId);
   console.log(`demo scenario seeded: ${organisations.map((o) => o.name).join(", ")}`);
 }
 

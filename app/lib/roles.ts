@@ -32,6 +32,7 @@ export const sections = {
   sites: { path: "/sites", label: "Sites", roles: staffRoles },
   clients: { path: "/clients", label: "Clients", roles: staffRoles },
   patterns: { path: "/patterns", label: "Patterns", roles: staffRoles },
+  filings: { path: "/filings", label: "Filings", roles: ["owner", "engineer", "reviewer", "regulator"] },
   history: { path: "/history", label: "History", roles: ["owner"] },
   members: { path: "/members", label: "Members", roles: ["owner"] },
   account: { path: "/account", label: "Account", roles: roles },

@@ -55,6 +55,8 @@ for (const viewport of widths) {
       const response = await visit(page, "/no-such-page");
       expect(response?.status()).toBe(404);
       await look(page, info, "not-found-signed-out");
+      expect((await visit(page, "/verify/AAAA-BBBB-CCCC-DDDD-EEEE"))?.status()).toBe(404);
+      await look(page, info, "verify-unknown");
     });
 
     test("a new consultant with a long name and address", async ({ page }, info) => {
@@ -105,6 +107,11 @@ for (const viewport of widths) {
           await page.getByRole("link", { name: "Calloway House" }).first().click();
           await expect(page.getByRole("heading", { name: "Calloway House", level: 1 })).toBeVisible();
           await look(page, info, "portal-site");
+        }
+        if (role === "regulator" || role === "engineer") {
+          await visit(page, "/filings");
+          await expect(page.getByRole("heading", { level: 1, name: role === "regulator" ? "Filings received" : "Filings" })).toBeVisible();
+          await look(page, info, `filings-${role}`);
         }
         if (role === "engineer") {
           await visit(page, "/account");

@@ -164,6 +164,12 @@ const cases: Case[] = [
   // The client portal: client members only. The fixture client member is bound to no client, so any site is 404 to it.
   { file: "routes/portal/home.tsx", method: "loader", path: () => "/portal", expect: rolesIn(["client"], "ok") },
   { file: "routes/portal/site.tsx", method: "loader", path: () => `/portal/sites/${siteId}`, params: () => ({ siteId }), expect: rolesIn(["client"], "not-found") },
+  // Filings: the regulator reads its inbox, owner/engineer/reviewer the organisation's; only engineers and reviewers file. An unknown filing id is 404.
+  { file: "routes/filings/inbox.tsx", method: "loader", path: () => "/filings", expect: rolesIn(["owner", "engineer", "reviewer", "regulator"], "ok") },
+  { file: "routes/filings/inbox.tsx", method: "action", path: () => "/filings", form: {}, expect: rolesIn(["engineer", "reviewer"], "bad-request") },
+  { file: "routes/filings/bundle.ts", method: "loader", path: () => `/filings/${randomUUID()}/bundle`, params: () => ({ filingId: randomUUID() }), expect: rolesIn(["owner", "engineer", "reviewer", "regulator"], "not-found") },
+  { file: "routes/api/v1/filings.ts", method: "loader", path: () => "/api/v1/filings", expect: apiRoles(["owner", "engineer", "reviewer", "regulator"], "ok") },
+  { file: "routes/api/v1/filing-bundle.ts", method: "loader", path: () => `/api/v1/filings/${randomUUID()}/bundle`, params: () => ({ filingId: randomUUID() }), expect: apiRoles(["owner", "engineer", "reviewer", "regulator"], "not-found") },
   // Last: signing out revokes the fixture sessions.
   { file: "routes/auth/sign-out.ts", method: "action", path: () => "/sign-out", form: {}, expect: () => "signed-out" },
 ];

@@ -96,3 +96,17 @@ describe("demo inventory", () => {
     expect(main.areas.overGeneralM2).toBeLessThan(main.areas.totalM2 / 10);
   });
 });
+
+describe("demo filing", () => {
+  it("holds a filing of Calloway House's issued assessment to the demo regulator, with its issued report", async () => {
+    const rows = await db
+      .select({ authority: schema.filing.authority, site: schema.site.name, email: schema.user.email, reportState: schema.document.state, kind: schema.document.kind })
+      .from(schema.filing)
+      .innerJoin(schema.site, eq(schema.site.id, schema.filing.siteId))
+      .innerJoin(schema.member, eq(schema.member.id, schema.filing.regulatorMemberId))
+      .innerJoin(schema.user, eq(schema.user.id, schema.member.userId))
+      .innerJoin(schema.document, eq(schema.document.id, schema.filing.documentId))
+      .where(eq(schema.user.email, "regulator@demo.isotrope.test"));
+    expect(rows).toEqual([{ authority: "Spectrum Safety Office", site: "Calloway House", email: "regulator@demo.isotrope.test", reportState: "issued", kind: "report" }]);
+  });
+});

@@ -1,6 +1,11 @@
-// The public verification of a certificate by its code (issue 9 §6, minimal for now): what a
-// stranger may learn is the verdict, the site's public name and city, the dates, the standard and
-// tier, and the issuer. Codes carry 100 random bits, so they cannot be guessed.
+// The public verification of a certificate by its code (issue 9 §6): what a stranger may learn is
+// the verdict (valid, superseded with the newer code, withdrawn, expired; anything else is unknown),
+// the site's public name and city, the dates, the standard and tier, and the issuer. Nothing else
+// (no address, client, results or people but the issuing reviewer) is read into the answer.
+// Codes (newCode in commands.server.ts) are 20 characters drawn uniformly from a 32-letter alphabet
+// (each from one random byte mod 32, and 256 is a multiple of 32, so unbiased): 20 × 5 = 100 bits.
+// At the page's rate limit (verify-limit.server.ts) a guesser would need far more than 10^20 years
+// to expect one hit among even a million issued codes.
 import { eq } from "drizzle-orm";
 import { db, schema } from "~/infra/db.server";
 import { verdict } from "./lifecycle";

@@ -21,6 +21,10 @@ describe("guideFor", () => {
     expect(guideFor("client", null, null).now.join(" ")).not.toContain("Record");
   });
 
+  it("sends a regulator to its inbox of filings", () => {
+    expect(guideFor("regulator", null, null).next).toMatchObject({ title: "Filings received", to: "/filings" });
+  });
+
   it("points an owner at invitations still waiting, counted", () => {
     expect(guideFor("owner", { members: 4, pending: 2 }).next.title).toBe("2 invitations waiting");
     expect(guideFor("owner", { members: 4, pending: 1 }).next.title).toBe("1 invitation waiting");
@@ -29,7 +33,7 @@ describe("guideFor", () => {
   it("names no section that is not built", () => {
     for (const role of roles) {
       const text = JSON.stringify(guideFor(role, { members: 2, pending: 0 }, { sites: 2, clients: 1 }));
-      for (const unbuilt of ["assessment", "document", "invoice", "certificate", "filing", "report"]) {
+      for (const unbuilt of ["assessment", "document", "invoice", "certificate", "report"]) {
         expect(text.toLowerCase(), `${role} mentions ${unbuilt}`).not.toContain(unbuilt);
       }
     }

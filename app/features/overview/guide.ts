@@ -87,5 +87,11 @@ export function guideFor(role: Role, team: Team | null, inventory: Inventory | n
       next: team && team.members <= 1 ? ownerNext(team) : inventory && inventory.sites === 0 ? sitesNext(inventory) : ownerNext(team ?? { members: 1, pending: 0 }),
     };
   }
+  if (role === "regulator") {
+    return {
+      now: ["Read the filings sent to you, by site, authority and date.", "Download each as one bundle: the engine's runs (they re-run to the same bytes), the inventory, the method and the issued PDF.", "Change your password from Account."],
+      next: { title: "Filings received", text: "Open your inbox of filings and download a bundle.", to: "/filings", action: "Open Filings" },
+    };
+  }
   return { now: memberNow, next: accountNext };
 }

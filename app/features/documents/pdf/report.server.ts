@@ -1,14 +1,13 @@
 // The report: cover, site, inventory, method, results (maps of each level, an elevation cut, worst
 // points, contributions, compliance distances), readings against predictions, the mitigation plan
 // and the cautions. Everything comes from the frozen assessment (source.ts).
-import { describeHeights } from "~/features/exposure/options";
-import { CLASS_NAMES } from "~/features/exposure/evaluate-site";
 import { signLabels, SIGN_CATEGORIES } from "~/features/exposure/mitigation";
 import { pdfColours as C } from "~/infra/pdf/palette";
 import { bullets, contentWidth, createPdf, ensureSpace, heading, PAGE, paragraph, say } from "~/infra/pdf/pdf.server";
 import { table } from "~/infra/pdf/table.server";
 import { areaText, dateText, metresText, percentText, wattsText } from "../format";
 import { cautionsBox, emitterLabels, METHOD_SOURCES, standardText } from "./common.server";
+import { methodLines } from "./method.server";
 import { reportResults } from "./report-results.server";
 import { readingRows } from "./readings";
 import { documentTitles, type DocumentSource } from "./source";
@@ -75,19 +74,7 @@ export async function renderReport(src: DocumentSource): Promise<Buffer> {
 
   // 3. Method.
   heading(doc, "3. Method, models and assumptions");
-  const o = a.options;
-  const limitSources = [...new Set(a.runs.flatMap((r) => r.response.emitters.map((e) => e.limit.source)))];
-  bullets(doc, [
-    `Standard and tier: ${standardText(a)}. Limits by frequency: ${limitSources.join("; ")}.`,
-    `Power density is summed over all emitters as fractions of each one's limit at its own frequency (Σ S_i / S_limit,i ≤ 1), shown as total % of the limit.`,
-    `Model: ${o.defaultModel} unless an emitter names its own; far field S = P·G/(4πR²) with a power reflection factor of ${o.reflectionFactor}${o.reflectionFactor === 2.56 ? " (OET-65's ground reflection)" : ""}.`,
-    `Heights: ${describeHeights(o)}; grid of ${o.gridStepM} m over each walkable surface.`,
-    `Time averaging through each emitter's duty factor and actual-maximum power factor (IEC 62232); both are 1 unless the operator supplied a value.`,
-    "Units: power density in W/m² (1 mW/cm² = 10 W/m², 1 µW/cm² = 0.01 W/m²); fields in V/m and A/m, related through η0 ≈ 376.73 Ω; angles in degrees (°); areas in m².",
-    "A place is within a limit at ≤ 100 % of it and over it above 100 %; any class ≥ 1 needs positive access control. Readings are set beside predictions as read, without adding the probe's own uncertainty (often ± 1 to 3 dB).",
-    `Exposure classes: ${CLASS_NAMES.map((c, i) => `${i}: ${c}`).join("; ")}.`,
-    `Computed by ${a.engine}. Each run's request and response are kept with the assessment and re-run to the same bytes.`,
-  ]);
+  bullets(doc, methodLines(a));
   heading(doc, "Published sources", 2);
   bullets(doc, METHOD_SOURCES, { size: 8.5 });
 
