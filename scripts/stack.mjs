@@ -178,10 +178,28 @@ async function startMail() {
   return { smtp: `smtp://127.0.0.1:${ports.smtp}`, web: `http://127.0.0.1:${ports.mailWeb}` };
 }
 
-async function startStripeFake() {
-  background("payments", process.execPath, [join(root, "mocks/stripe-server.mjs"), String(ports.stripe)]);
-  await waitForHttp(`http://127.0.0.1:${ports.stripe}/v1/customers`, "the payment fake");
-  return `http://127.0.0.1:${ports.stripe}`;
+// The payment settings (README "Payments"): the local fake by default; a real Stripe test account
+// when STRIPE_SECRET_KEY is set to another key and STRIPE_API_BASE is unset (start/dev only).
+function stripeSettings(appUrl) {
+  const local = { secretKey: "sk_test_isotrope_local", webhookSecret: "whsec_isotrope_local" };
+  if (mode === "test") return { ...local, fake: true, apiBase: null };
+  const secretKey = process.env.STRIPE_SECRET_KEY || local.secretKey;
+  const webhookSecret = process.env.STRIPE_WEBHOOK_SECRET || local.webhookSecret;
+  const apiBase = process.env.STRIPE_API_BASE || null;
+  const real = !apiBase && secretKey !== local.secretKey;
+  return { secretKey, webhookSecret, fake: !apiBase && !real, apiBase, webhookUrl: process.env.STRIPE_WEBHOOK_URL || `${appUrl}/api/stripe/webhook` };
+}
+
+async function startStripeFake(settings, appUrl) {
+  const base = `http://127.0.0.1:${ports.stripe}`;
+  background("payments", process.execPath, [join(root, "mocks/stripe-server.mjs"), String(ports.stripe)], {
+    STRIPE_SECRET_KEY: settings.secretKey,
+    STRIPE_WEBHOOK_SECRET: settings.webhookSecret,
+    STRIPE_API_BASE: base,
+    STRIPE_WEBHOOK_URL: settings.webhookUrl ?? `${appUrl}/api/stripe/webhook`,
+  });
+  await waitForHttp(`${base}/_fake/health`, "the payment fake");
+  return base;
 }
 
 function authSecret() {
@@ -201,14 +219,19 @@ async function services() {
   const databaseUrl = process.env.DATABASE_URL && mode !== "test" ? process.env.DATABASE_URL : await startPostgres();
   await migrate(databaseUrl);
   const mail = process.env.SMTP_URL && mode !== "test" ? { smtp: process.env.SMTP_URL, web: null } : await startMail();
-  const stripe = process.env.STRIPE_API_BASE && mode !== "test" ? process.env.STRIPE_API_BASE : await startStripeFake();
   const baseUrl = `http://127.0.0.1:${ports.app}`;
+  const appUrl = process.env.APP_URL && mode !== "test" ? process.env.APP_URL : baseUrl;
+  const payments = stripeSettings(appUrl);
+  // STRIPE_API_BASE "" means Stripe itself (the SDK's own host).
+  const stripe = payments.fake ? await startStripeFake(payments, appUrl) : (payments.apiBase ?? "");
   const env = {
     DATABASE_URL: databaseUrl,
     SMTP_URL: mail.smtp,
     MAILDEV_API: mail.web ?? "",
     STRIPE_API_BASE: stripe,
-    APP_URL: process.env.APP_URL && mode !== "test" ? process.env.APP_URL : baseUrl,
+    STRIPE_SECRET_KEY: payments.secretKey,
+    STRIPE_WEBHOOK_SECRET: payments.webhookSecret,
+    APP_URL: appUrl,
     PORT: String(ports.app),
     BETTER_AUTH_SECRET: mode === "test" ? "isotrope-test-secret-0123456789abcdef0123456789" : authSecret(),
   };
@@ -242,7 +265,7 @@ async function start() {
   Isotrope is running.
     app            ${env.APP_URL}
     mail catcher   ${mail.web ?? env.SMTP_URL}
-    payment fake   ${env.STRIPE_API_BASE}
+    payments       ${env.STRIPE_API_BASE ? `${env.STRIPE_API_BASE} (local fake; its events → ${env.APP_URL}/api/stripe/webhook)` : "Stripe (test account from STRIPE_SECRET_KEY)"}
   Demo sign-ins (password: ${process.env.DEMO_PASSWORD ?? "isotrope-demo"}):
     ${DEMO.join("\n    ")}
     engineer@second.isotrope.test   (a second organisation)
