@@ -77,5 +77,8 @@ export default [
     route("v1/assessments/:a/compare/:b", "routes/api/v1/assessment-compare.ts"),
     route("v1/documents", "routes/api/v1/documents.ts"),
     route("v1/documents/:documentId/pdf", "routes/api/v1/document-pdf.ts"),
+    route("v1/invoices", "routes/api/v1/invoices.ts"),
+    route("v1/payments", "routes/api/v1/payments.ts"),
+    route("stripe/webhook", "routes/api/stripe/webhook.ts"),
   ]),
 ] satisfies RouteConfig;
