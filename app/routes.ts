@@ -46,12 +46,27 @@ export default [
     ]),
     route("history", "routes/history/organization.tsx"),
     route("patterns", "routes/patterns/patterns.tsx"),
+    ...prefix("billing", [
+      index("routes/billing/invoices.tsx"),
+      route("prices", "routes/billing/prices.tsx"),
+      route("payments", "routes/billing/payments.tsx"),
+      route("invoices/new", "routes/billing/invoice-new.tsx"),
+      route("invoices/:invoiceId", "routes/billing/invoice.tsx"),
+    ]),
+    ...prefix("portal", [
+      route("invoices", "routes/portal/invoices.tsx"),
+      route("invoices/:invoiceId", "routes/portal/invoice.tsx"),
+      route("certificates", "routes/portal/certificates.tsx"),
+      route("sites/:siteId/assessments/:assessmentId/certificate", "routes/portal/certificate.tsx"),
+      route("sites/:siteId/assessments/:assessmentId/certificate/paid", "routes/portal/certificate-paid.tsx"),
+    ]),
     // Unknown addresses: the 404 inside the shell, with navigation when signed in.
     route("*", "routes/not-found.tsx"),
   ]),
   route("files/:fileId", "routes/files/file.ts"),
   route("documents/:documentId/pdf", "routes/documents/pdf.ts"),
   route("verify/:code", "routes/verify.tsx"),
+  route("billing/invoices/:invoiceId/pdf", "routes/billing/invoice-pdf.ts"),
   route("sign-out", "routes/auth/sign-out.ts"),
   ...prefix("api", [
     route("auth/*", "routes/api/auth.ts"),

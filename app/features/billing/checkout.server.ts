@@ -84,3 +84,30 @@ export async function checkoutStatus(buyer: Pick<Buyer, "organizationId" | "clie
   const [row] = await db.select().from(checkout).where(and(eq(checkout.stripeSessionId, sessionId), eq(checkout.organizationId, buyer.organizationId), eq(checkout.clientId, buyer.clientId)));
   return row ?? null;
 }
+
+/** The client's assessments whose report is issued, with the certificate issued for each (if any). */
+export async function certificateList(buyer: Pick<Buyer, "organizationId" | "clientId" | "role">) {
+  if (buyer.role !== "client" || !buyer.clientId) return [];
+  const rows = await db
+    .select({ assessmentId: schema.assessment.id, assessmentName: schema.assessment.name, siteId: schema.site.id, siteName: schema.site.name, kind: schema.document.kind, documentId: schema.document.id, issuedAt: schema.document.issuedAt })
+    .from(schema.document)
+    .innerJoin(schema.assessment, eq(schema.assessment.id, schema.document.assessmentId))
+    .innerJoin(schema.site, eq(schema.site.id, schema.assessment.siteId))
+    .where(and(eq(schema.site.organizationId, buyer.organizationId), eq(schema.site.clientId, buyer.clientId), eq(schema.document.state, "issued")))
+    .orderBy(desc(schema.document.issuedAt));
+  const byAssessment = new Map<string, { assessmentId: string; assessmentName: string; siteId: string; siteName: string; reportIssuedAt: Date | null; certificateId: string | null }>();
+  for (const r of rows) {
+    const entry = byAssessment.get(r.assessmentId) ?? { assessmentId: r.assessmentId, assessmentName: r.assessmentName, siteId: r.siteId, siteName: r.siteName, reportIssuedAt: null, certificateId: null };
+    if (r.kind === "report" && !entry.reportIssuedAt) entry.reportIssuedAt = r.issuedAt;
+    if (r.kind === "certificate" && !entry.certificateId) entry.certificateId = r.documentId;
+    byAssessment.set(r.assessmentId, entry);
+  }
+  return [...byAssessment.values()].filter((e) => e.reportIssuedAt);
+}
+
+/** The newest checkout of this assessment by the buyer's client (what the cancel page reports). */
+export async function latestCertificateCheckout(buyer: Pick<Buyer, "organizationId" | "clientId">, assessmentId: string) {
+  if (!buyer.clientId) return null;
+  const [row] = await db.select().from(checkout).where(and(eq(checkout.organizationId, buyer.organizationId), eq(checkout.clientId, buyer.clientId), eq(checkout.assessmentId, assessmentId))).orderBy(desc(checkout.createdAt)).limit(1);
+  return row ?? null;
+}

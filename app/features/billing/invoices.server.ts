@@ -135,7 +135,7 @@ async function sendInvoice(row: InvoiceRow) {
   if (!to.length) return 0;
   const [c] = await db.select({ name: client.name }).from(client).where(eq(client.id, row.clientId));
   const [org] = await db.select({ name: schema.organization.name }).from(schema.organization).where(eq(schema.organization.id, row.organizationId));
-  const facts = { number: invoiceNumberText(row.number), clientName: c?.name ?? "", total: row.total, currency: row.currency, payUrl: payUrl(row.id), pdfUrl: `${base()}/portal/invoices/${row.id}/pdf`, organizationName: org?.name ?? "Isotrope" };
+  const facts = { number: invoiceNumberText(row.number), clientName: c?.name ?? "", total: row.total, currency: row.currency, payUrl: payUrl(row.id), pdfUrl: invoicePdfUrl(row.id), organizationName: org?.name ?? "Isotrope" };
   await queueMails(to.map((address) => invoiceMail(address, facts)));
   return to.length;
 }
