@@ -4,10 +4,6 @@ import { receiveWebhook } from "~/features/billing/webhook.server";
 import { methodNotAllowed } from "~/lib/api.server";
 import type { Route } from "./+types/webhook";
 
-export function loader() {
-  return methodNotAllowed("POST");
-}
-
 export async function action({ request }: Route.ActionArgs) {
   if (request.method !== "POST") return methodNotAllowed("POST");
   const raw = Buffer.from(await request.arrayBuffer());
