@@ -9,7 +9,8 @@ import { env } from "~/infra/env.server";
 import { auditChange, type Actor } from "~/lib/audit.server";
 import { DomainError } from "~/lib/domain-error";
 import { canVoid } from "./invoice-state";
-import { invoiceNumberOf } from "./json";
+import { invoiceNumberText } from "./json";
+export { invoiceNumberText };
 import { invoiceMail } from "./mails";
 import { activePrice } from "./prices.server";
 import type { InvoiceCreateInput } from "./schemas";
@@ -22,7 +23,6 @@ export type InvoiceLineRow = typeof invoiceLine.$inferSelect;
 export type InvoiceScope = { organizationId: string; clientId: string | null; role: string };
 
 const base = () => env.APP_URL.replace(/\/$/, "");
-export const invoiceNumberText = (n: number | null) => invoiceNumberOf(n) ?? "draft";
 export const payUrl = (id: string) => `${base()}/portal/invoices/${id}`;
 export const invoicePdfUrl = (id: string) => `${base()}/billing/invoices/${id}/pdf`;
 

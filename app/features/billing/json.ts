@@ -9,6 +9,8 @@ type PaymentLike = { id: string; clientId: string; purpose: CheckoutPurpose; inv
 
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
 export const invoiceNumberOf = (n: number | null) => (n === null ? null : `INV-${String(n).padStart(5, "0")}`);
+/** "INV-00012", or "draft" before the invoice is issued. */
+export const invoiceNumberText = (n: number | null) => invoiceNumberOf(n) ?? "draft";
 
 export function invoiceJson(i: InvoiceLike, clientName: string) {
   return { id: i.id, number: invoiceNumberOf(i.number), clientId: i.clientId, clientName, state: i.state, currency: i.currency, total: i.total, amountPaid: i.amountPaid, amountRefunded: i.amountRefunded, issuedAt: iso(i.issuedAt), paidAt: iso(i.paidAt), voidedAt: iso(i.voidedAt), createdAt: iso(i.createdAt) };
