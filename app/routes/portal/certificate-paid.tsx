@@ -3,6 +3,7 @@
 // has recorded the payment and the certificate's PDF is stored, then offers the download.
 import { data, useLocation } from "react-router";
 import { ButtonLink } from "~/components/button";
+import { TextLink } from "~/components/text-link";
 import { Card, Notice, PageHeader } from "~/components/panels";
 import { requireMember } from "~/features/auth/guard.server";
 import { checkoutStatus } from "~/features/billing/checkout.server";
@@ -48,7 +49,7 @@ export default function CertificatePaid({ loaderData }: Route.ComponentProps) {
             <Notice state="caution" role="status">The payment did not go through{s.failure ? `: ${s.failure}` : ""}. Nothing was issued.</Notice>
           )}
         </Card>
-        <ButtonLink to={s.back} tone="quiet">Back to the certificate</ButtonLink>
+        <TextLink to={s.back}>Back to the certificate</TextLink>
       </div>
     </>
   );

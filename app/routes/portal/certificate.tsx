@@ -4,6 +4,7 @@
 // here with ?cancelled=1, and nothing is issued.
 import { data, Form, redirect, useLocation, useNavigation } from "react-router";
 import { Button, ButtonLink } from "~/components/button";
+import { TextLink } from "~/components/text-link";
 import { DateText } from "~/components/date-text";
 import { FormErrors } from "~/components/field";
 import { Card, Notice, PageHeader } from "~/components/panels";
@@ -77,7 +78,7 @@ export default function BuyCertificate({ loaderData, actionData }: Route.Compone
             </Form>
           )}
         </Card>
-        <ButtonLink to="/portal/certificates" tone="quiet">All certificates</ButtonLink>
+        <TextLink to="/portal/certificates">All certificates</TextLink>
       </div>
     </>
   );
