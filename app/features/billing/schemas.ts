@@ -52,11 +52,14 @@ export const refundSchema = z.object({
   reason: text(300).default(""),
 });
 
+/** A calendar day (YYYY-MM-DD) that exists: "2026-13-45" is dropped rather than reaching the query. */
+const isoDay = z.string().regex(/^\d{4}-\d{2}-\d{2}$/).refine((s) => !Number.isNaN(Date.parse(`${s}T00:00:00Z`)) && new Date(`${s}T00:00:00Z`).toISOString().startsWith(s));
+
 export const paymentFilterSchema = z.object({
   state: z.enum(["succeeded", "partly_refunded", "refunded"]).optional().catch(undefined),
   purpose: z.enum(["invoice", "certificate"]).optional().catch(undefined),
   clientId: recordId.optional().catch(undefined),
-  from: z.string().regex(/^\d{4}-\d{2}-\d{2}$/).optional().catch(undefined),
-  to: z.string().regex(/^\d{4}-\d{2}-\d{2}$/).optional().catch(undefined),
+  from: isoDay.optional().catch(undefined),
+  to: isoDay.optional().catch(undefined),
 });
 export type PaymentFilter = z.output<typeof paymentFilterSchema>;
