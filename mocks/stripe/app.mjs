@@ -2,12 +2,14 @@
 // with events, events), then stripe-stateful-mock's app (customers, products, prices, charges, refunds…).
 import express from "express";
 import { createRequire } from "node:module";
+import { catalogRoutes } from "./catalog-routes.mjs";
 import { checkoutRoutes } from "./checkout-routes.mjs";
 import { errorHandler } from "./errors.mjs";
 import { eventRoutes } from "./event-routes.mjs";
 import { createEvents } from "./events.mjs";
 import { moneyRoutes } from "./money-routes.mjs";
 import { pageRoutes } from "./page-routes.mjs";
+import { allSessions } from "./sessions.mjs";
 
 const require = createRequire(import.meta.url);
 const { createExpressApp } = require("stripe-stateful-mock");
@@ -29,12 +31,12 @@ function requireKey(config) {
   };
 }
 
-/** Idempotency-Key on our POSTs: the same key and body replays the first answer; another body is a 400. */
+/** Idempotency-Key on API POSTs: the same key and body replays the first answer; another body is a 400. */
 function idempotency() {
   const seen = new Map();
   return (req, res, next) => {
     const key = req.get("idempotency-key");
-    if (req.method !== "POST" || !key || !(req.path.startsWith("/v1/checkout/") || req.path === "/v1/refunds")) return next();
+    if (req.method !== "POST" || !key) return next();
     const id = `${req.path}\n${key}`;
     const body = JSON.stringify(req.body ?? {});
     const stored = seen.get(id);
@@ -65,8 +67,11 @@ export function createFakeStripeApp(config) {
   ours.use(idempotency());
   ours.use(checkoutRoutes(state));
   ours.use(moneyRoutes(state));
+  ours.use(catalogRoutes());
   app.use(ours);
   app.use(errorHandler);
+  // Stripe expires sessions on its own at expires_at: look every 30 s (reads also expire them).
+  setInterval(() => allSessions(state), 30_000).unref();
   app.use(createExpressApp());
   return { app, state };
 }

@@ -2,6 +2,7 @@
 // line_items, expire.
 import express from "express";
 import { invalid, wrap } from "./errors.mjs";
+import { presentIntent } from "./money-routes.mjs";
 import { allSessions, createSession, expireSession, requireSession } from "./sessions.mjs";
 import { clone, expandList, paginate } from "./util.mjs";
 
@@ -13,7 +14,9 @@ export function presentSession(state, session, expand) {
     const { items } = state.sessions.get(session.id);
     out.line_items = { object: "list", data: clone(items), has_more: false, url: `/v1/checkout/sessions/${session.id}/line_items` };
   }
-  if (names.includes("payment_intent") && session.payment_intent) out.payment_intent = clone(state.intents.get(session.payment_intent));
+  if (names.some((n) => n === "payment_intent" || n.startsWith("payment_intent.")) && session.payment_intent) {
+    out.payment_intent = presentIntent(state.intents.get(session.payment_intent), names.includes("payment_intent.latest_charge") ? ["latest_charge"] : []);
+  }
   return out;
 }
 
@@ -31,7 +34,9 @@ export function checkoutRoutes(state) {
       if (req.query[key] !== undefined) data = data.filter((s) => s[key] === String(req.query[key]));
     }
     const list = paginate(data, req.query, "/v1/checkout/sessions", invalid);
-    list.data = list.data.map((s) => presentSession(state, s, req.query.expand));
+    // List expansions name the items' fields as `data.<field>`.
+    const expand = expandList(req.query.expand).map((name) => name.replace(/^data\./, ""));
+    list.data = list.data.map((s) => presentSession(state, s, expand));
     res.json(list);
   });
 

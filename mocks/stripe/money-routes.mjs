@@ -12,7 +12,7 @@ const { charges } = require("stripe-stateful-mock/dist/api/charges");
 const { refunds } = require("stripe-stateful-mock/dist/api/refunds");
 const ACCOUNT = "acct_default";
 
-function presentIntent(intent, expand) {
+export function presentIntent(intent, expand) {
   const out = clone(intent);
   if (expandList(expand).includes("latest_charge") && intent.latest_charge) out.latest_charge = clone(charges.retrieve(ACCOUNT, intent.latest_charge, "id"));
   return out;

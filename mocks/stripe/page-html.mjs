@@ -35,6 +35,8 @@ const css = `
   button.decline { color: #a4161a; border-color: #a4161a; }
   button:focus-visible { outline: 3px solid #b01e64; outline-offset: 2px; }
   .note { margin-top: 1.25rem; font-size: .85rem; color: #59564c; }
+  code { overflow-wrap: anywhere; }
+  @media (max-width: 30rem) { main { margin-top: 1.25rem; } .sheet { padding: 1rem; } table { font-size: .9rem; } }
   .state { padding: .75rem 1rem; border-radius: 4px; background: #e7efe3; color: #2c5a37; }
   .state.bad { background: #fbe9e7; color: #a4161a; }
   a { color: #b01e64; }
