@@ -6,6 +6,7 @@ import { queueMails } from "~/features/documents/jobs.server";
 import { db, schema } from "~/infra/db.server";
 import type { InvoiceState } from "~/infra/db/schema/billing";
 import { env } from "~/infra/env.server";
+import { stripe } from "~/infra/stripe.server";
 import { auditChange, type Actor } from "~/lib/audit.server";
 import { DomainError } from "~/lib/domain-error";
 import { canVoid } from "./invoice-state";
@@ -141,7 +142,7 @@ async function sendInvoice(row: InvoiceRow) {
 }
 
 export async function voidInvoice(actor: Actor, id: string) {
-  return db.transaction(async (tx) => {
+  const voided = await db.transaction(async (tx) => {
     const [row] = await tx.select().from(invoice).where(and(eq(invoice.id, id), eq(invoice.organizationId, actor.organizationId))).for("update");
     if (!row) throw new DomainError("There is no such invoice.", 404);
     if (!canVoid(row.state)) throw new DomainError("Only an unpaid invoice can be voided.", 409);
@@ -150,4 +151,9 @@ export async function voidInvoice(actor: Actor, id: string) {
     await auditChange(tx, actor, { action: "invoice.voided", entity: "invoice", entityId: id, before: { state: row.state }, after: { state: "void", openCheckout: Boolean(open) } });
     return after;
   });
+  // Close the payment pages still open for it, so a void invoice cannot be paid (best effort: a
+  // payment that still lands is recorded and the invoice stays void, for the billing member to refund).
+  const open = await db.select({ sessionId: schema.checkout.stripeSessionId }).from(schema.checkout).where(and(eq(schema.checkout.invoiceId, id), eq(schema.checkout.state, "open")));
+  for (const c of open) if (c.sessionId) await stripe.checkout.sessions.expire(c.sessionId).catch((e) => console.error("[billing] expiring a checkout failed:", e instanceof Error ? e.message : e));
+  return voided;
 }
