@@ -4,6 +4,7 @@
 // client pays it through the e-mailed link, billing refunds half and the invoice shows partly
 // refunded. Screens are kept as screenshots (checkout, success, invoice) and the invoice PDF too.
 import { writeFileSync } from "node:fs";
+import AxeBuilder from "@axe-core/playwright";
 import { expect, test, type Page } from "@playwright/test";
 import postgres from "postgres";
 import { latestMail, linkIn, shot, signIn, visit } from "./helpers";
@@ -111,4 +112,27 @@ test("billing issues an invoice, the client pays through the link, billing refun
   await shot(billing, info, "payments");
   const csv = await billing.request.get("/api/v1/payments?format=csv");
   expect(await csv.text()).toContain(number);
+});
+
+test("the billing and portal pages fit a phone and pass axe", async ({ browser }, info) => {
+  const pages: [string, string[]][] = [
+    ["billing@demo.isotrope.test", ["/billing", "/billing/prices", "/billing/payments", "/billing/invoices/new"]],
+    [CLIENT, ["/portal/invoices", "/portal/certificates"]],
+  ];
+  for (const [who, paths] of pages) {
+    for (const width of [1280, 390]) {
+      const context = await browser.newContext({ viewport: { width, height: 800 } });
+      const page = await context.newPage();
+      await signIn(page, who);
+      for (const path of paths) {
+        await visit(page, path);
+        const overflow = await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+        expect(overflow, `${path} at ${width} px`).toBeLessThanOrEqual(0);
+        const axe = await new AxeBuilder({ page }).analyze();
+        expect(axe.violations.map((v) => `${v.id}: ${v.nodes.length}`), `${path} at ${width} px`).toEqual([]);
+        await shot(page, info, `${width}-${path.replace(/\//g, "_")}`);
+      }
+      await context.close();
+    }
+  }
 });

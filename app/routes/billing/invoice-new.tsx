@@ -70,6 +70,7 @@ export default function NewInvoice({ loaderData, actionData }: Route.ComponentPr
               {assessments.length === 0 ? (
                 <EmptyState title="This client's sites have no assessments yet." />
               ) : (
+                <div className="overflow-x-auto">
                 <table className="min-w-full text-sm">
                   <caption className="sr-only">Assessments</caption>
                   <thead className="border-b border-ink-900"><tr><th className="label-caps px-2 py-2 text-left">Assessment</th><th className="label-caps px-2 py-2 text-left">Site</th><th className="label-caps px-2 py-2 text-left">Made</th><th className="label-caps px-2 py-2 text-left">Assessment fee ({fee("assessment_fee")})</th><th className="label-caps px-2 py-2 text-left">Certificate fee ({fee("certificate_fee")})</th></tr></thead>
@@ -85,6 +86,7 @@ export default function NewInvoice({ loaderData, actionData }: Route.ComponentPr
                     ))}
                   </tbody>
                 </table>
+                </div>
               )}
               <label className="flex items-center gap-2 text-sm"><input type="checkbox" name="rush" /> Add the rush surcharge ({fee("rush_surcharge")})</label>
               <TextAreaField id="notes" name="notes" label="Notes on the invoice" maxLength={2000} rows={3} errors={errors.fields.notes} />

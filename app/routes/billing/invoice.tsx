@@ -89,6 +89,7 @@ export default function Invoice({ loaderData, actionData }: Route.ComponentProps
       <div className="space-y-6">
         <FormErrors errors={topErrors} />
         <Card title="Lines">
+          <div className="overflow-x-auto">
           <table className="min-w-full text-sm">
             <caption className="sr-only">Invoice lines</caption>
             <thead className="border-b border-ink-900"><tr><th className="label-caps px-2 py-2 text-left">Description</th><th className="label-caps px-2 py-2 text-right">Qty</th><th className="label-caps px-2 py-2 text-right">Amount</th></tr></thead>
@@ -97,6 +98,7 @@ export default function Invoice({ loaderData, actionData }: Route.ComponentProps
               <tr className="font-bold"><td className="px-2 py-2">Total (no tax computed)</td><td /><td className="px-2 py-2 text-right figures">{money(inv.total)}</td></tr>
             </tbody>
           </table>
+          </div>
           <dl className="mt-4 grid grid-cols-2 gap-2 text-sm sm:grid-cols-4">
             <div><dt className="label-caps">Issued</dt><dd>{inv.issuedAt ? <DateText value={inv.issuedAt} /> : "Not yet"}</dd></div>
             <div><dt className="label-caps">Paid</dt><dd className="figures">{money(inv.amountPaid)}</dd></div>

@@ -75,8 +75,8 @@ export default function Prices({ loaderData, actionData }: Route.ComponentProps)
                 <label className="flex items-center gap-2 text-sm">
                   <input type="checkbox" name="active" defaultChecked={price?.active ?? true} /> On sale
                 </label>
-                <div className="flex items-center justify-between gap-3 pt-2">
-                  <span className="text-xs text-graphite-600">{price?.stripePriceId ? <>Stripe price <span className="figures">{price.stripePriceId}</span></> : "Not yet at the payment service"}</span>
+                <div className="flex flex-wrap items-center justify-between gap-3 pt-2">
+                  <span className="min-w-0 text-xs text-graphite-600 [overflow-wrap:anywhere]">{price?.stripePriceId ? <>Stripe price <span className="figures">{price.stripePriceId}</span></> : "Not yet at the payment service"}</span>
                   <Button size="sm" disabled={busy}>Save {label.toLowerCase()}</Button>
                 </div>
               </Form>
