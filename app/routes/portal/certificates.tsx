@@ -24,7 +24,7 @@ const columns = [
   column.accessor("reportIssuedAt", { header: "Report issued", cell: (c) => (c.getValue() ? <DateText value={c.getValue()!} /> : "—") }),
   column.display({
     id: "certificate",
-    header: "Certificate",
+    header: "PDF",
     cell: (c) => {
       const r = c.row.original;
       return r.certificateId ? (
