@@ -46,11 +46,23 @@ export default [
     ]),
     route("history", "routes/history/organization.tsx"),
     route("patterns", "routes/patterns/patterns.tsx"),
+    route("filings", "routes/filings/inbox.tsx"),
+    ...prefix("billing", [
+      index("routes/billing/invoices.tsx"),
+      route("prices", "routes/billing/prices.tsx"),
+      route("payments", "routes/billing/payments.tsx"),
+      route("invoices/new", "routes/billing/invoice-new.tsx"),
+      route("invoices/:invoiceId", "routes/billing/invoice.tsx"),
+    ]),
     ...prefix("portal", [
       index("routes/portal/home.tsx"),
       route("sites/:siteId", "routes/portal/site.tsx"),
+      route("invoices", "routes/portal/invoices.tsx"),
+      route("invoices/:invoiceId", "routes/portal/invoice.tsx"),
+      route("certificates", "routes/portal/certificates.tsx"),
+      route("sites/:siteId/assessments/:assessmentId/certificate", "routes/portal/certificate.tsx"),
+      route("sites/:siteId/assessments/:assessmentId/certificate/paid", "routes/portal/certificate-paid.tsx"),
     ]),
-    route("filings", "routes/filings/inbox.tsx"),
     // Unknown addresses: the 404 inside the shell, with navigation when signed in.
     route("*", "routes/not-found.tsx"),
   ]),
@@ -58,6 +70,7 @@ export default [
   route("documents/:documentId/pdf", "routes/documents/pdf.ts"),
   route("verify/:code", "routes/verify.tsx"),
   route("filings/:filingId/bundle", "routes/filings/bundle.ts"),
+  route("billing/invoices/:invoiceId/pdf", "routes/billing/invoice-pdf.ts"),
   route("sign-out", "routes/auth/sign-out.ts"),
   ...prefix("api", [
     route("auth/*", "routes/api/auth.ts"),
@@ -85,5 +98,8 @@ export default [
     route("v1/documents/:documentId/pdf", "routes/api/v1/document-pdf.ts"),
     route("v1/filings", "routes/api/v1/filings.ts"),
     route("v1/filings/:filingId/bundle", "routes/api/v1/filing-bundle.ts"),
+    route("v1/invoices", "routes/api/v1/invoices.ts"),
+    route("v1/payments", "routes/api/v1/payments.ts"),
+    route("stripe/webhook", "routes/api/stripe/webhook.ts"),
   ]),
 ] satisfies RouteConfig;

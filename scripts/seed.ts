@@ -4,6 +4,7 @@ import { sql as rawSql } from "drizzle-orm";
 import { auth } from "../app/features/auth/auth.server";
 import { db, schema, sql } from "../app/infra/db.server";
 import type { Role } from "../app/lib/roles";
+import { seedBilling } from "./demo/billing";
 import { seedDocuments } from "./demo/documents";
 import { seedFilings } from "./demo/filings";
 import { seedInventory } from "./demo/inventory";
@@ -57,6 +58,7 @@ async function main() {
   });
   await seedDocuments(mainOrganizationId);
   await seedFilings(mainOrganizationId);
+  await seedBilling(mainOrganizationId);
   console.log(`demo scenario seeded: ${organisations.map((o) => o.name).join(", ")}`);
 }
 

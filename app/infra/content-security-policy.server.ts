@@ -3,6 +3,10 @@
 // Non-HTML answers get the server's stricter default (server/security-headers.mjs).
 // Later work extends the directives here.
 import { randomBytes } from "node:crypto";
+import { env } from "~/infra/env.server";
+
+/** Where a checkout form may lead (a form post answered by a redirect to the payment page): the local fake, or Stripe's checkout. */
+const checkoutOrigins = () => [env.STRIPE_API_BASE ? new URL(env.STRIPE_API_BASE).origin : "https://checkout.stripe.com"];
 
 export const createNonce = () => randomBytes(16).toString("base64");
 
@@ -20,7 +24,7 @@ export function contentSecurityPolicy(nonce: string, { dev = false } = {}) {
     "worker-src": ["'self'", "blob:"],
     "frame-ancestors": ["'none'"],
     "base-uri": ["'none'"],
-    "form-action": ["'self'"],
+    "form-action": ["'self'", ...checkoutOrigins()],
     "object-src": ["'none'"],
   };
   return Object.entries(directives)

@@ -33,6 +33,7 @@ export const sections = {
   clients: { path: "/clients", label: "Clients", roles: staffRoles },
   patterns: { path: "/patterns", label: "Patterns", roles: staffRoles },
   filings: { path: "/filings", label: "Filings", roles: ["owner", "engineer", "reviewer", "regulator"] },
+  billing: { path: "/billing", label: "Billing", roles: ["owner", "billing"] },
   history: { path: "/history", label: "History", roles: ["owner"] },
   members: { path: "/members", label: "Members", roles: ["owner"] },
   account: { path: "/account", label: "Account", roles: roles },

@@ -47,7 +47,7 @@ test("engineer drafts a letter, reviewer issues it, the client downloads it from
   await expect(page).toHaveURL(/\/portal$/);
   await expect(page.getByRole("heading", { name: "Your sites", level: 1 })).toBeVisible();
   const nav = page.getByRole("navigation", { name: "Main" });
-  await expect(nav.getByRole("link")).toHaveText(["Your sites", "Account"]);
+  await expect(nav.getByRole("link")).toHaveText(["Your sites", "Invoices", "Certificates", "Account"]);
   await expect(page.getByRole("link", { name: "Calloway House" })).toBeVisible();
   await expect(page.getByText(/areas? to keep people out of/).first()).toBeVisible();
   await expect(page.getByRole("complementary", { name: "RF safety cautions" })).toBeVisible();

@@ -42,6 +42,8 @@ let visitId = "";
 let photoId = "";
 let assessmentId = "";
 let documentId = "";
+let invoiceId = "";
+const billingRoles = ["owner", "billing"] as const;
 
 
 const cases: Case[] = [
@@ -159,6 +161,27 @@ const cases: Case[] = [
   { file: "routes/documents/pdf.ts", method: "loader", path: () => `/documents/${documentId}/pdf`, params: () => ({ documentId }), expect: (a) => (a === "anonymous" ? "sign-in" : a === "regulator" ? "forbidden" : a === "client" ? "not-found" : "conflict") },
   // Public: an unknown (or unissued) certificate code is 404 for everyone.
   { file: "routes/verify.tsx", method: "loader", path: () => "/verify/ABCD-EFGH-JKLM-NPQR-STUV", params: () => ({ code: "ABCD-EFGH-JKLM-NPQR-STUV" }), expect: () => "not-found" },
+  // Billing (issue 10): staff pages for billing and owner; the fixture invoice is a draft, so a (fixture, unbound) client finds nothing.
+  { file: "routes/billing/invoices.tsx", method: "loader", path: () => "/billing", expect: rolesIn(billingRoles, "ok") },
+  { file: "routes/billing/prices.tsx", method: "loader", path: () => "/billing/prices", expect: rolesIn(billingRoles, "ok") },
+  { file: "routes/billing/prices.tsx", method: "action", path: () => "/billing/prices", form: {}, expect: rolesIn(billingRoles, "bad-request") },
+  { file: "routes/billing/payments.tsx", method: "loader", path: () => "/billing/payments", expect: rolesIn(billingRoles, "ok") },
+  { file: "routes/billing/invoice-new.tsx", method: "loader", path: () => `/billing/invoices/new?clientId=${clientId}`, expect: rolesIn(billingRoles, "ok") },
+  { file: "routes/billing/invoice-new.tsx", method: "action", path: () => "/billing/invoices/new", form: {}, expect: rolesIn(billingRoles, "bad-request") },
+  { file: "routes/billing/invoice.tsx", method: "loader", path: () => `/billing/invoices/${invoiceId}`, params: () => ({ invoiceId }), expect: rolesIn(billingRoles, "ok") },
+  { file: "routes/billing/invoice.tsx", method: "action", path: () => `/billing/invoices/${invoiceId}`, form: {}, params: () => ({ invoiceId }), expect: rolesIn(billingRoles, "bad-request") },
+  { file: "routes/billing/invoice-pdf.ts", method: "loader", path: () => `/billing/invoices/${invoiceId}/pdf`, params: () => ({ invoiceId }), expect: (a) => (a === "client" ? "not-found" : rolesIn(billingRoles, "ok")(a)) },
+  { file: "routes/portal/invoices.tsx", method: "loader", path: () => "/portal/invoices", expect: rolesIn(["client"], "ok") },
+  { file: "routes/portal/invoice.tsx", method: "loader", path: () => `/portal/invoices/${invoiceId}`, params: () => ({ invoiceId }), expect: rolesIn(["client"], "not-found") },
+  { file: "routes/portal/invoice.tsx", method: "action", path: () => `/portal/invoices/${invoiceId}`, form: {}, params: () => ({ invoiceId }), expect: rolesIn(["client"], "not-found") },
+  { file: "routes/portal/certificates.tsx", method: "loader", path: () => "/portal/certificates", expect: rolesIn(["client"], "ok") },
+  { file: "routes/portal/certificate.tsx", method: "loader", path: () => `/portal/sites/${siteId}/assessments/${assessmentId}/certificate`, params: () => ({ siteId, assessmentId }), expect: rolesIn(["client"], "not-found") },
+  { file: "routes/portal/certificate.tsx", method: "action", path: () => `/portal/sites/${siteId}/assessments/${assessmentId}/certificate`, form: {}, params: () => ({ siteId, assessmentId }), expect: rolesIn(["client"], "not-found") },
+  { file: "routes/portal/certificate-paid.tsx", method: "loader", path: () => `/portal/sites/${siteId}/assessments/${assessmentId}/certificate/paid?session_id=cs_none`, params: () => ({ siteId, assessmentId }), expect: rolesIn(["client"], "not-found") },
+  { file: "routes/api/v1/invoices.ts", method: "loader", path: () => "/api/v1/invoices", expect: apiRoles(["owner", "billing", "client"], "ok") },
+  { file: "routes/api/v1/payments.ts", method: "loader", path: () => "/api/v1/payments", expect: apiRoles(["owner", "billing"], "ok") },
+  // The webhook takes no session: without a Stripe-Signature header it is 400 for everyone.
+  { file: "routes/api/stripe/webhook.ts", method: "action", path: () => "/api/stripe/webhook", form: {}, expect: () => "bad-request" },
   { file: "routes/api/v1/documents.ts", method: "loader", path: () => "/api/v1/documents", expect: apiRoles([...staffRoles, "client"], "ok") },
   { file: "routes/api/v1/document-pdf.ts", method: "loader", path: () => `/api/v1/documents/${documentId}/pdf`, params: () => ({ documentId }), expect: (a) => (a === "anonymous" ? "unauthorized" : a === "regulator" ? "forbidden" : a === "client" ? "not-found" : "conflict") },
   // The client portal: client members only. The fixture client member is bound to no client, so any site is 404 to it.
@@ -214,6 +237,8 @@ beforeAll(async () => {
   assessmentId = frozen.id;
   const [doc] = await db.insert(schema.document).values({ organizationId: org.id, siteId, assessmentId, kind: "report", authorName: "Fixture", code: `ROUTE-TABLE-${randomUUID()}` }).returning();
   documentId = doc.id;
+  const [inv] = await db.insert(schema.invoice).values({ organizationId: org.id, clientId, currency: "eur", total: 100 }).returning();
+  invoiceId = inv.id;
   invitationId = randomUUID();
   await db.insert(schema.invitation).values({
     id: invitationId, organizationId: org.id, email: `invitee-${invitationId}@fixture.test`, role: "engineer",

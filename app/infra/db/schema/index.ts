@@ -11,3 +11,4 @@ export * from "./auth-throttle";
 export * from "./assessments";
 export * from "./documents";
 export * from "./filings";
+export * from "./billing";
