@@ -6,7 +6,11 @@
 // test stack (never on data you care about):
 //   BUILD_DIR=build-test npm run -s build && WITH_APP=1 npm run -s with-stack -- node scripts/bench-inventory.mjs
 // BENCH_SECONDS (per target, default 10), BENCH_CONNECTIONS (default 20), BENCH_SITES, BENCH_EMITTERS.
+// With APP_PID (set by `with-stack` when it starts the app) it also prints the server's CPU time
+// per request, the figure a busy machine disturbs least. BENCH_ONLY=<regex> measures only the
+// targets whose name matches.
 import { createHash, createHmac, randomBytes, randomUUID } from "node:crypto";
+import { readFileSync } from "node:fs";
 import autocannon from "autocannon";
 import postgres from "postgres";
 
@@ -60,16 +64,31 @@ async function seed() {
   return { org, cookie: `better-auth.session_token=${encodeURIComponent(`${token}.${signature}`)}`, apiToken, siteId: sixty.id };
 }
 
+const appPid = process.env.APP_PID;
+/** The server process's user + system CPU time in ms (Linux, APP_PID set by `with-stack`), or null. */
+function serverCpuMs() {
+  if (!appPid) return null;
+  try {
+    const fields = readFileSync(`/proc/${appPid}/stat`, "utf8").split(") ")[1].split(" ");
+    return (Number(fields[11]) + Number(fields[12])) * 10; // clock ticks of 10 ms
+  } catch {
+    return null;
+  }
+}
+
 /** One autocannon run that keeps every response time, for exact percentiles. */
 function measure(name, path, headers) {
   return new Promise((resolve, reject) => {
     const times = [];
     let bad = 0;
+    const cpuBefore = serverCpuMs();
     const instance = autocannon({ url: `${base}${path}`, connections, duration: seconds, headers }, (error, result) => {
       if (error) return reject(error);
       times.sort((a, b) => a - b);
       const at = (p) => times[Math.min(times.length - 1, Math.floor((p / 100) * times.length))];
-      resolve({ target: name, "req/s": Math.round(result.requests.average), p50: at(50).toFixed(1), p95: at(95).toFixed(1), p99: at(99).toFixed(1), "non-2xx": bad + result.non2xx });
+      const cpuAfter = serverCpuMs();
+      const cpu = cpuBefore !== null && cpuAfter !== null ? { "server CPU ms/req": Number(((cpuAfter - cpuBefore) / Math.max(1, times.length)).toFixed(2)) } : {};
+      resolve({ target: name, "req/s": Math.round(result.requests.average), p50: at(50).toFixed(1), p95: at(95).toFixed(1), p99: at(99).toFixed(1), "non-2xx": bad + result.non2xx, ...cpu });
     });
     instance.on("response", (_client, status, _bytes, ms) => {
       times.push(ms);
@@ -94,7 +113,8 @@ async function main() {
       if (check.status !== 200) console.log(`warning: ${path} answered ${check.status}`);
     }
     const rows = [];
-    for (const [name, path, headers] of targets) rows.push(await measure(name, path, headers));
+    const only = process.env.BENCH_ONLY ? new RegExp(process.env.BENCH_ONLY, "i") : null;
+    for (const [name, path, headers] of targets) if (!only || only.test(name)) rows.push(await measure(name, path, headers));
     console.log(`${base}, ${connections} connections, ${seconds} s each (latencies in ms):`);
     console.table(rows);
   } finally {

@@ -30,7 +30,10 @@ export async function redirectWithFlash(to: string, flash: Flash, init: { header
 
 /** Reads (and clears) the pending flash message. */
 export async function takeFlash(request: Request) {
-  const session = await storage.getSession(request.headers.get("cookie"));
+  const cookie = request.headers.get("cookie");
+  // Almost every page has no message waiting: skip parsing and verifying the cookies then.
+  if (!cookie?.includes("isotrope_flash=")) return { flash: null, headers: undefined };
+  const session = await storage.getSession(cookie);
   const flash = session.get("flash") ?? null;
   return { flash, headers: flash ? { "set-cookie": await storage.commitSession(session) } : undefined };
 }

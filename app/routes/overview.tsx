@@ -4,6 +4,8 @@ import { Card, PageHeader } from "~/components/panels";
 import { TitleBlock } from "~/components/title-block";
 import { requireMember } from "~/features/auth/guard.server";
 import { teamCounts } from "~/features/members/members.server";
+import { AttentionCard } from "~/features/overview/attention-card";
+import { attentionFor } from "~/features/overview/attention.server";
 import { guideFor } from "~/features/overview/guide";
 import { roleLabels, staffRoles } from "~/lib/roles";
 import { inventoryCounts } from "~/features/sites/counts.server";
@@ -18,18 +20,19 @@ export async function loader(args: Route.LoaderArgs) {
   // A landlord's home is the client portal.
   if (member.role === "client") throw redirect(PORTAL_HOME);
   const staff = (staffRoles as readonly string[]).includes(member.role);
-  const [team, inventory] = await Promise.all([
+  const [team, inventory, attention] = await Promise.all([
     member.role === "owner" ? teamCounts(member.organizationId) : null,
     staff ? inventoryCounts(member.organizationId) : null,
+    attentionFor(member.role, { organizationId: member.organizationId, userId: member.user.id }),
   ]);
-  return { name: member.user.name, role: member.role, organizationName: member.organizationName, team, inventory };
+  return { name: member.user.name, role: member.role, organizationName: member.organizationName, team, inventory, attention };
 }
 
 const teamLine = ({ members, pending }: { members: number; pending: number }) =>
   `${members} ${members === 1 ? "member" : "members"}${pending ? ` · ${pending} invited` : ""}`;
 
 export default function Overview({ loaderData }: Route.ComponentProps) {
-  const { name, role, organizationName, team, inventory } = loaderData;
+  const { name, role, organizationName, team, inventory, attention } = loaderData;
   const guide = guideFor(role, team, inventory);
   const cells = [
     { label: "Organisation", value: organizationName },
@@ -44,6 +47,7 @@ export default function Overview({ loaderData }: Route.ComponentProps) {
       </PageHeader>
       <div className="space-y-6">
         <TitleBlock label="You and your organisation" cells={cells} />
+        {attention ? <AttentionCard attention={attention} /> : null}
         <div className="grid gap-6 md:grid-cols-2">
           <Card title="What you can do now">
             <ul className="list-disc space-y-2 pl-5 marker:text-graphite-500">

@@ -3,10 +3,8 @@
 // Pass the loader's or action's arguments ({ request, context }) so that the layout and the page
 // share one session lookup per request (session-context.server.ts); a bare Request works too.
 import { data, redirect } from "react-router";
-import { eq } from "drizzle-orm";
-import { findMembership, lookupOf, type GuardArgs, type Membership, type SignedIn } from "~/features/auth/session-context.server";
+import { lookupOf, type GuardArgs, type Membership, type SignedIn } from "~/features/auth/session-context.server";
 import { resolveToken } from "~/features/auth/tokens.server";
-import { db, schema } from "~/infra/db.server";
 import { apiError } from "~/lib/api.server";
 import type { Role } from "~/lib/roles";
 
@@ -58,10 +56,10 @@ export async function requireApiMember(args: GuardArgs, options: { roles?: reado
   let user: NonNullable<SignedIn>["user"];
   let membership: Membership | null;
   if (authorization) {
-    const byToken = await signedInByToken(authorization);
+    const byToken = await resolveToken(authorization);
     if (!byToken) throw apiError(401, "That API token is not valid: it may have been revoked.");
     user = byToken.user;
-    membership = await findMembership(byToken.user.id, byToken.organizationId);
+    membership = byToken.membership;
   } else {
     const lookup = lookupOf(args);
     const signedIn = await lookup.signedIn();
@@ -74,10 +72,3 @@ export async function requireApiMember(args: GuardArgs, options: { roles?: reado
   return { ...membership, user };
 }
 
-/** A token stands for its member in its organisation, with the member's current role. */
-async function signedInByToken(authorization: string) {
-  const token = await resolveToken(authorization);
-  if (!token) return null;
-  const [user] = await db.select().from(schema.user).where(eq(schema.user.id, token.userId));
-  return user ? { user, organizationId: token.organizationId } : null;
-}

@@ -1,10 +1,11 @@
 // API tokens: a member's bearer credential for /api/v1. The token is shown once at creation;
 // only its SHA-256 is stored, so a database read never reveals a usable token.
 import { createHash, randomBytes } from "node:crypto";
-import { and, desc, eq } from "drizzle-orm";
+import { and, asc, desc, eq, sql } from "drizzle-orm";
 import { db, schema } from "~/infra/db.server";
 import { audit, type Actor } from "~/lib/audit.server";
 import { DomainError } from "~/lib/domain-error";
+import { isRole, type Role } from "~/lib/roles";
 
 const { apiToken } = schema;
 const PREFIX = "iso_";
@@ -43,17 +44,47 @@ export async function revokeToken(actor: Actor & { memberId: string }, tokenId: 
 
 const TOUCH_EVERY_MS = 60_000;
 
-/** The user and organisation a bearer token stands for, or null. Notes when it was last used (to the minute). */
+/**
+ * What a bearer token stands for, in one prepared query: the token, its user, and the user's
+ * memberships (oldest first, as findMembership orders them), or null for no such token. Notes when
+ * the token was last used (to the minute).
+ */
+const tokenWithMemberships = db
+  .select({
+    id: apiToken.id,
+    organizationId: apiToken.organizationId,
+    lastUsedAt: apiToken.lastUsedAt,
+    user: schema.user,
+    memberId: schema.member.id,
+    role: schema.member.role,
+    memberOrganizationId: schema.organization.id,
+    organizationName: schema.organization.name,
+    clientId: schema.clientMember.clientId,
+  })
+  .from(apiToken)
+  .innerJoin(schema.user, eq(schema.user.id, apiToken.userId))
+  .leftJoin(schema.member, eq(schema.member.userId, schema.user.id))
+  .leftJoin(schema.organization, eq(schema.organization.id, schema.member.organizationId))
+  .leftJoin(schema.clientMember, eq(schema.clientMember.memberId, schema.member.id))
+  .where(eq(apiToken.tokenHash, sql.placeholder("tokenHash")))
+  .orderBy(asc(schema.member.createdAt))
+  .prepare("token_with_memberships");
+
 export async function resolveToken(authorization: string) {
   const match = authorization.match(/^Bearer\s+(\S{1,200})$/i);
   if (!match || !match[1].startsWith(PREFIX)) return null;
-  const [row] = await db
-    .select({ id: apiToken.id, userId: apiToken.userId, organizationId: apiToken.organizationId, lastUsedAt: apiToken.lastUsedAt })
-    .from(apiToken)
-    .where(eq(apiToken.tokenHash, hashOf(match[1])));
-  if (!row) return null;
-  if (!row.lastUsedAt || Date.now() - row.lastUsedAt.getTime() > TOUCH_EVERY_MS) {
-    await db.update(apiToken).set({ lastUsedAt: new Date() }).where(eq(apiToken.id, row.id));
+  const rows = await tokenWithMemberships.execute({ tokenHash: hashOf(match[1]) });
+  const first = rows[0];
+  if (!first) return null;
+  if (!first.lastUsedAt || Date.now() - first.lastUsedAt.getTime() > TOUCH_EVERY_MS) {
+    await db.update(apiToken).set({ lastUsedAt: new Date() }).where(eq(apiToken.id, first.id));
   }
-  return row;
+  // The same choice as findMembership: the token's organisation, else the oldest membership.
+  const memberships = rows.filter((r) => r.memberOrganizationId !== null);
+  const row = memberships.find((r) => r.memberOrganizationId === first.organizationId) ?? memberships[0];
+  const membership =
+    row && isRole(row.role)
+      ? { memberId: row.memberId!, role: row.role as Role, organizationId: row.memberOrganizationId!, organizationName: row.organizationName!, clientId: row.clientId }
+      : null;
+  return { id: first.id, userId: first.user.id, organizationId: first.organizationId, user: first.user, membership };
 }

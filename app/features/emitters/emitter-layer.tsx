@@ -8,6 +8,7 @@ import { initials, OPERATOR_INK, OPERATOR_PALETTE, operatorColours } from "./ope
 export type PlanEmitter = { id: string; label: string; operator: string; x: number; y: number; z: number; azimuthDeg: number; active: boolean };
 
 const opName = (o: string) => o.trim() || "—";
+const px1 = (v: number) => Math.round(v * 10) / 10;
 
 export function EmitterLayer({ frame, emitters, highlightId }: { frame: PlanFrame; emitters: PlanEmitter[]; highlightId?: string | null }) {
   const colours = operatorColours(emitters.map((e) => e.operator));
@@ -24,14 +25,15 @@ export function EmitterLayer({ frame, emitters, highlightId }: { frame: PlanFram
         const [dx, dy] = [Math.sin(a), -Math.cos(a)];
         const r = 9;
         const len = 30;
-        const tip: XY = [dx * len, dy * len];
-        const head = (s: number) => `${tip[0] - dx * 8 + -dy * s * 5},${tip[1] - dy * 8 + dx * s * 5}`;
+        // A tenth of a pixel is plenty: fewer digits make a lighter page (decision 0009).
+        const tip: XY = [px1(dx * len), px1(dy * len)];
+        const head = (s: number) => `${px1(tip[0] - dx * 8 + -dy * s * 5)},${px1(tip[1] - dy * 8 + dx * s * 5)}`;
         const fill = e.active ? OPERATOR_PALETTE[i] : "#ffffff";
         const ink = e.active ? OPERATOR_INK[i] : "#000000";
         return (
           <g key={e.id} transform={`translate(${px.toFixed(1)} ${py.toFixed(1)})`} opacity={e.active ? 1 : 0.75}>
             <title>{`${e.label} · ${opName(e.operator)} · azimuth ${e.azimuthDeg}° · z ${e.z} m${e.active ? "" : " · inactive"}`}</title>
-            <line x1={dx * r} y1={dy * r} x2={tip[0]} y2={tip[1]} stroke="#000000" strokeWidth={e.id === highlightId ? 2.5 : 1.5} strokeDasharray={e.active ? undefined : "3 2"} />
+            <line x1={px1(dx * r)} y1={px1(dy * r)} x2={tip[0]} y2={tip[1]} stroke="#000000" strokeWidth={e.id === highlightId ? 2.5 : 1.5} strokeDasharray={e.active ? undefined : "3 2"} />
             <polygon points={`${tip[0]},${tip[1]} ${head(1)} ${head(-1)}`} fill="#000000" />
             <circle r={r} fill={fill} stroke={OPERATOR_PALETTE[i]} strokeWidth={e.active ? 1 : 2.5} strokeDasharray={e.active ? undefined : "3 2"} />
             <circle r={r} fill="none" stroke="#000000" strokeWidth={e.id === highlightId ? 2 : 0.75} />

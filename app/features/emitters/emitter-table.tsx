@@ -1,15 +1,11 @@
-// The site's emitters in one dense table (TanStack Table; sortable by any column), each row with
-// its EIRP and ERP from the engine's unit functions, edited in place (EmitterForm through a
-// fetcher) and deleted after a second click. Below 48rem each row is a card (.table-stack).
-import {
-  flexRender,
-  getCoreRowModel,
-  getSortedRowModel,
-  useReactTable,
-  type ColumnDef,
-  type SortingState,
-} from "@tanstack/react-table";
-import { Fragment, useMemo, useState } from "react";
+// The site's emitters in one dense table (sortable by any column), each row with its EIRP and ERP
+// from the engine's unit functions, edited in place (EmitterForm through a fetcher) and deleted
+// after a second click. Below 48rem each row is a card (.table-stack).
+// It is the heaviest server render of the portal (60+ rows × 15 cells), so it is kept lean (decision
+// 0009): plain columns sorted by a small hook (sort.ts, TanStack's click order) instead of a table
+// model, the cells' shared styles in one CSS rule (.emitter-grid in app.css) instead of on every
+// cell, and the row editor rendered only when a row is opened.
+import { Fragment, useMemo, useState, type ReactNode } from "react";
 import { useFetcher } from "react-router";
 import { buttonClass } from "~/components/button";
 import {
@@ -27,6 +23,7 @@ import {
   operatorColours,
 } from "./operator-palette";
 import { parametricLabels, type ParametricKind } from "./schemas";
+import { nextSort, sortRows, type SortState } from "./sort";
 
 export type EmitterRowView = EmitterValues & {
   id: string;
@@ -87,6 +84,12 @@ function patternText(r: EmitterRowView, names: Map<string, string>) {
 /** Columns a phone's card leaves out (the row's editor shows them). */
 const phoneHidden = new Set(["band", "lossDb", "model", "factors", "erp"]);
 
+type Column = { id: string; header: string; value: (r: EmitterRowView) => string | number; cell?: (r: EmitterRowView) => ReactNode; className?: string };
+
+/** The cells' class beyond .emitter-grid's shared one: phones leave some out; the label stays put when scrolling sideways. */
+const cellClass = (id: string) => (phoneHidden.has(id) ? "phone-hide" : id === "label" ? "sticky-label" : undefined);
+const editButton = buttonClass("quiet", "px-2 py-1");
+
 export function EmitterTable({
   rows,
   library,
@@ -97,7 +100,7 @@ export function EmitterTable({
   canEdit: boolean;
 }) {
   const [editing, setEditing] = useState<string | null>(null);
-  const [sorting, setSorting] = useState<SortingState>([]);
+  const [sorting, setSorting] = useState<SortState>(null);
   const names = useMemo(
     () => new Map(library.map((p) => [p.id, p.name])),
     [library],
@@ -106,16 +109,16 @@ export function EmitterTable({
     () => operatorColours(rows.map((r) => r.operator)),
     [rows],
   );
-  const columns = useMemo<ColumnDef<EmitterRowView, unknown>[]>(
-    () => [
+  const columns = useMemo<Column[]>(
+    () => ([
       {
         id: "label",
         header: "Label",
-        accessorKey: "label",
-        cell: (c) => (
+        value: (r) => r.label,
+        cell: (r) => (
           <span className="font-semibold">
-            {c.row.original.label}
-            {c.row.original.active ? null : (
+            {r.label}
+            {r.active ? null : (
               <span className="ml-1 rounded-control border border-rule-strong px-1 text-xs font-normal text-graphite-600">
                 off
               </span>
@@ -126,13 +129,13 @@ export function EmitterTable({
       {
         id: "operator",
         header: "Operator",
-        accessorKey: "operator",
-        cell: (c) => {
-          const i = colours.get(c.row.original.operator.trim() || "—") ?? 0;
+        value: (r) => r.operator,
+        cell: (r) => {
+          const i = colours.get(r.operator.trim() || "—") ?? 0;
           return (
             <span
               className="inline-flex max-w-28 items-center max-md:max-w-none gap-1.5"
-              title={c.row.original.operator}
+              title={r.operator}
             >
               <svg
                 width="10"
@@ -149,7 +152,7 @@ export function EmitterTable({
                   strokeWidth="0.5"
                 />
               </svg>
-              <span className="truncate">{c.row.original.operator || "—"}</span>
+              <span className="truncate">{r.operator || "—"}</span>
             </span>
           );
         },
@@ -157,25 +160,24 @@ export function EmitterTable({
       {
         id: "band",
         header: "Band",
-        accessorKey: "band",
-        cell: (c) => (
-          <span className="block max-w-20 truncate max-md:max-w-none" title={c.row.original.band}>
-            {c.row.original.band || "—"}
+        value: (r) => r.band,
+        cell: (r) => (
+          <span className="block max-w-20 truncate max-md:max-w-none" title={r.band}>
+            {r.band || "—"}
           </span>
         ),
       },
       {
         id: "frequencyMHz",
         header: "MHz",
-        accessorKey: "frequencyMHz",
-        cell: (c) => formatNumber(c.row.original.frequencyMHz),
+        value: (r) => r.frequencyMHz,
+        cell: (r) => formatNumber(r.frequencyMHz),
       },
       {
         id: "power",
         header: "Power",
-        accessorFn: (r) => r.powerPerCarrierW * r.carriers,
-        cell: (c) => {
-          const r = c.row.original;
+        value: (r) => r.powerPerCarrierW * r.carriers,
+        cell: (r) => {
           return (
             <span
               title={`${formatWatts(r.powerPerCarrierW)} per carrier × ${r.carriers}`}
@@ -191,54 +193,52 @@ export function EmitterTable({
       {
         id: "lossDb",
         header: "Loss",
-        accessorKey: "lossDb",
-        cell: (c) => `${c.row.original.lossDb} dB`,
+        value: (r) => r.lossDb,
+        cell: (r) => `${r.lossDb} dB`,
       },
       {
         id: "gain",
         header: "Gain",
-        accessorKey: "gainDbi",
-        cell: (c) => {
-          const r = c.row.original;
+        value: (r) => r.gainDbi,
+        cell: (r) => {
           return `${tidy(gainFromDbi(r.gainDbi, r.gainUnit))} ${r.gainUnit}`;
         },
       },
       {
         id: "eirp",
         header: "EIRP",
-        accessorKey: "eirpW",
-        cell: (c) => (
+        value: (r) => r.eirpW,
+        cell: (r) => (
           <span className="font-semibold">
-            {formatWatts(c.row.original.eirpW)}
+            {formatWatts(r.eirpW)}
           </span>
         ),
       },
       {
         id: "erp",
         header: "ERP",
-        accessorKey: "erpW",
-        cell: (c) => formatWatts(c.row.original.erpW),
+        value: (r) => r.erpW,
+        cell: (r) => formatWatts(r.erpW),
       },
       {
         id: "pattern",
         header: "Pattern",
-        accessorFn: (r) => patternText(r, names),
-        cell: (c) => (
+        value: (r) => patternText(r, names),
+        cell: (r) => (
           <span
             className="block max-w-36 truncate"
-            title={String(c.getValue())}
+            title={patternText(r, names)}
           >
-            {String(c.getValue())}
+            {patternText(r, names)}
           </span>
         ),
       },
-      { id: "azimuthDeg", header: "Az°", accessorKey: "azimuthDeg" },
+      { id: "azimuthDeg", header: "Az°", value: (r) => r.azimuthDeg },
       {
         id: "tilt",
         header: "Tilt°",
-        accessorFn: (r) => r.mechanicalTiltDeg + r.electricalTiltDeg,
-        cell: (c) => {
-          const r = c.row.original;
+        value: (r) => r.mechanicalTiltDeg + r.electricalTiltDeg,
+        cell: (r) => {
           return (
             <span
               title={`mechanical ${r.mechanicalTiltDeg}° + electrical ${r.electricalTiltDeg}°`}
@@ -254,18 +254,16 @@ export function EmitterTable({
       {
         id: "position",
         header: "x, y, z (m)",
-        accessorFn: (r) => r.z,
-        cell: (c) => {
-          const r = c.row.original;
+        value: (r) => r.z,
+        cell: (r) => {
           return `${r.x}, ${r.y}, ${r.z}`;
         },
       },
       {
         id: "model",
         header: "Model",
-        accessorKey: "model",
-        cell: (c) => {
-          const r = c.row.original;
+        value: (r) => r.model,
+        cell: (r) => {
           return r.model === "aperture"
             ? `dish ${r.dishDiameterM} m`
             : r.apertureM && r.model !== "spherical"
@@ -278,9 +276,8 @@ export function EmitterTable({
       {
         id: "factors",
         header: "Avg.",
-        accessorFn: (r) => r.dutyFactor * r.actualMaxFactor * r.tddFactor,
-        cell: (c) => {
-          const r = c.row.original;
+        value: (r) => r.dutyFactor * r.actualMaxFactor * r.tddFactor,
+        cell: (r) => {
           const f = r.dutyFactor * r.actualMaxFactor * r.tddFactor;
           return (
             <span
@@ -291,92 +288,65 @@ export function EmitterTable({
           );
         },
       },
-    ],
+    ] satisfies Column[]).map((column) => ({ ...column, className: cellClass(column.id) })),
     [names, colours],
   );
-  const table = useReactTable({
-    data: rows,
-    columns,
-    state: { sorting },
-    onSortingChange: setSorting,
-    getCoreRowModel: getCoreRowModel(),
-    getSortedRowModel: getSortedRowModel(),
-    getRowId: (r) => r.id,
-  });
+  const sorted = useMemo(() => sortRows(rows, columns, sorting), [rows, columns, sorting]);
   const span = columns.length + (canEdit ? 1 : 0);
   return (
     <div className="relative max-w-full overflow-x-auto rounded-sheet border border-rule bg-sheet">
-      <table className="table-stack min-w-full text-sm md:text-[13px]">
+      <table className="table-stack emitter-grid min-w-full text-sm md:text-[13px]">
         <caption className="sr-only">
           Emitters of this site, with EIRP and ERP
         </caption>
         <thead className="border-b border-ink-900">
-          {table.getHeaderGroups().map((group) => (
-            <tr key={group.id}>
-              {group.headers.map((h) => {
-                const sorted = h.column.getIsSorted();
-                return (
-                  <th
-                    key={h.id}
-                    scope="col"
-                    aria-sort={
-                      sorted === "asc"
-                        ? "ascending"
-                        : sorted === "desc"
-                          ? "descending"
-                          : undefined
-                    }
-                    className={`label-caps px-1.5 py-2 text-left font-medium whitespace-nowrap ${h.column.id === "label" ? "md:sticky md:left-0 md:z-10 md:bg-sheet" : ""}`}
+          <tr>
+            {columns.map((column) => {
+              const dir = sorting?.id === column.id ? (sorting.desc ? "desc" : "asc") : false;
+              return (
+                <th
+                  key={column.id}
+                  scope="col"
+                  aria-sort={dir === "asc" ? "ascending" : dir === "desc" ? "descending" : undefined}
+                  className={`label-caps px-1.5 py-2 text-left font-medium whitespace-nowrap ${column.id === "label" ? "sticky-label" : ""}`}
+                >
+                  <button
+                    type="button"
+                    className="inline-flex items-center gap-0.5 hover:text-ink-900"
+                    onClick={() => setSorting((current) => nextSort(current, column, rows))}
                   >
-                    <button
-                      type="button"
-                      className="inline-flex items-center gap-0.5 hover:text-ink-900"
-                      onClick={h.column.getToggleSortingHandler()}
-                    >
-                      {flexRender(h.column.columnDef.header, h.getContext())}
-                      <span aria-hidden="true" className="w-2">
-                        {sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : ""}
-                      </span>
-                    </button>
-                  </th>
-                );
-              })}
-              {canEdit ? (
-                <th scope="col" className="px-2 py-2">
-                  <span className="sr-only">Actions</span>
+                    {column.header}
+                    <span aria-hidden="true" className="w-2">
+                      {dir === "asc" ? "▲" : dir === "desc" ? "▼" : ""}
+                    </span>
+                  </button>
                 </th>
-              ) : null}
-            </tr>
-          ))}
+              );
+            })}
+            {canEdit ? (
+              <th scope="col" className="px-2 py-2">
+                <span className="sr-only">Actions</span>
+              </th>
+            ) : null}
+          </tr>
         </thead>
         <tbody>
-          {table.getRowModel().rows.map((row) => (
+          {sorted.map((row) => (
             <Fragment key={row.id}>
-              <tr
-                className={`border-b border-rule align-top ${editing === row.id ? "bg-paper" : "hover:bg-paper/60"} ${row.original.active ? "" : "text-graphite-600"}`}
-              >
-                {row.getVisibleCells().map((cell) => (
-                  <td
-                    key={cell.id}
-                    data-label={String(cell.column.columnDef.header)}
-                    className={`px-1.5 py-1.5 whitespace-nowrap text-ink-900 tabular-nums max-md:whitespace-normal ${phoneHidden.has(cell.column.id) ? "max-md:hidden!" : ""} ${cell.column.id === "label" ? "md:sticky md:left-0 md:z-10 md:bg-sheet" : ""}`}
-                  >
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
+              <tr className={editing === row.id ? "bg-paper" : row.active ? undefined : "text-graphite-600"}>
+                {columns.map((column) => (
+                  <td key={column.id} data-label={column.header} className={column.className}>
+                    {column.cell ? column.cell(row) : String(column.value(row))}
                   </td>
                 ))}
                 {canEdit ? (
-                  <td
-                    data-label=""
-                    className="px-2 py-1 text-right whitespace-nowrap"
-                  >
+                  <td data-label="" className="row-actions">
                     <button
                       type="button"
-                      className={buttonClass("quiet", "px-2 py-1")}
+                      className={editButton}
                       aria-expanded={editing === row.id}
-                      onClick={() =>
-                        setEditing(editing === row.id ? null : row.id)
-                      }
-                      aria-label={`Edit emitter ${row.original.label}`}
+                      onClick={() => setEditing(editing === row.id ? null : row.id)}
+                      aria-label={`Edit emitter ${row.label}`}
                     >
                       {editing === row.id ? "Close" : "Edit"}
                     </button>
@@ -391,17 +361,17 @@ export function EmitterTable({
                         intent="save-emitter"
                         formId={`emitter-${row.id}`}
                         defaults={{
-                          ...formDefaults(row.original),
-                          id: row.original.id,
-                          version: String(row.original.version),
+                          ...formDefaults(row),
+                          id: row.id,
+                          version: String(row.version),
                         }}
                         library={library}
-                        submitLabel={`Save ${row.original.label}`}
+                        submitLabel={`Save ${row.label}`}
                         onDone={() => setEditing(null)}
                         onCancel={() => setEditing(null)}
                       />
                       <div className="mt-3 border-t border-rule pt-3">
-                        <DeleteEmitter row={row.original} />
+                        <DeleteEmitter row={row} />
                       </div>
                     </div>
                   </td>

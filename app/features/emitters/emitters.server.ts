@@ -14,13 +14,25 @@ const { emitter, antennaPattern } = schema;
 export type Who = Actor & Scope;
 export type EmitterRow = typeof emitter.$inferSelect;
 
+const emittersQuery = (handle: Tx | typeof db, siteId: string | ReturnType<typeof sql.placeholder>) =>
+  handle.select().from(emitter).where(eq(emitter.siteId, siteId)).orderBy(asc(emitter.position), asc(emitter.createdAt));
+const libraryQuery = (handle: Tx | typeof db, organizationId: string | ReturnType<typeof sql.placeholder>) =>
+  handle
+    .select({ id: antennaPattern.id, name: antennaPattern.name, kind: antennaPattern.kind, hBeamwidthDeg: antennaPattern.hBeamwidthDeg, vBeamwidthDeg: antennaPattern.vBeamwidthDeg })
+    .from(antennaPattern)
+    .where(eq(antennaPattern.organizationId, organizationId))
+    .orderBy(asc(antennaPattern.name));
+/** Prepared once for the pages' reads; a transaction builds its own. */
+const emittersOfSite = emittersQuery(db, sql.placeholder("siteId")).prepare("emitters_of_site");
+const libraryOfOrganization = libraryQuery(db, sql.placeholder("organizationId")).prepare("library_refs");
+
 export function listEmitters(siteId: string, tx: Tx | typeof db = db) {
-  return tx.select().from(emitter).where(eq(emitter.siteId, siteId)).orderBy(asc(emitter.position), asc(emitter.createdAt));
+  return tx === db ? emittersOfSite.execute({ siteId }) : emittersQuery(tx, siteId);
 }
 
 /** The organisation's pattern library by id and name (for choosing and for the CSV's `pattern` column). */
 export function libraryRefs(organizationId: string, tx: Tx | typeof db = db) {
-  return tx.select({ id: antennaPattern.id, name: antennaPattern.name, kind: antennaPattern.kind, hBeamwidthDeg: antennaPattern.hBeamwidthDeg, vBeamwidthDeg: antennaPattern.vBeamwidthDeg }).from(antennaPattern).where(eq(antennaPattern.organizationId, organizationId)).orderBy(asc(antennaPattern.name));
+  return tx === db ? libraryOfOrganization.execute({ organizationId }) : libraryQuery(tx, organizationId);
 }
 
 /** Refuses a pattern id that is not in this organisation's library. */

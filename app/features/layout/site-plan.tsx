@@ -91,12 +91,12 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
   const gridStep = scale > 12 ? 1 : scale > 3 ? 5 : 10;
   const lines: ReactNode[] = [];
   for (let x = Math.ceil(bounds.minX / gridStep) * gridStep; x <= bounds.maxX; x += gridStep) {
-    const [px] = frame.toPx(x, 0);
+    const px = Math.round(frame.toPx(x, 0)[0] * 10) / 10;
     const major = Math.abs(x % (gridStep * 5)) < 1e-9;
     lines.push(<line key={`x${x}`} x1={px} x2={px} y1={0} y2={frame.height} className={major ? "stroke-rule" : "stroke-rule"} />);
   }
   for (let y = Math.ceil(bounds.minY / gridStep) * gridStep; y <= bounds.maxY; y += gridStep) {
-    const [, py] = frame.toPx(0, y);
+    const py = Math.round(frame.toPx(0, y)[1] * 10) / 10;
     const major = Math.abs(y % (gridStep * 5)) < 1e-9;
     lines.push(<line key={`y${y}`} y1={py} y2={py} x1={0} x2={frame.width} className={major ? "stroke-rule" : "stroke-rule"} />);
   }

@@ -25,55 +25,89 @@ const sortColumns = {
   updated: site.updatedAt,
 } as const;
 
+type ListShape = { q: boolean; kind: boolean; clientId: boolean; scopeClient: boolean; sort: SiteSort; dir: "asc" | "desc" };
+type ListStatements = { page: ReturnType<typeof pageStatement>; count: ReturnType<typeof countStatement> };
+const placeholder = (name: string) => sql.placeholder(name);
+
+function listWhere(shape: ListShape) {
+  const q = placeholder("q");
+  return and(
+    eq(site.organizationId, placeholder("organizationId")),
+    shape.scopeClient ? eq(site.clientId, placeholder("scopeClientId")) : undefined,
+    shape.q ? or(ilike(site.name, q), ilike(site.city, q), ilike(site.address, q)) : undefined,
+    shape.kind ? eq(site.kind, placeholder("kind")) : undefined,
+    shape.clientId ? eq(site.clientId, placeholder("clientId")) : undefined,
+  );
+}
+
+function pageStatement(shape: ListShape, name: string) {
+  // Ties go in the sort's own direction, so one (organization_id, column, id) index serves both
+  // directions (read backwards for desc): emitter counts tie on most sites.
+  const by = shape.dir === "desc" ? desc : asc;
+  return db
+    .select({ id: site.id, name: site.name, kind: site.kind, city: site.city, clientId: site.clientId, clientName: client.name, emitterCount: site.emitterCount, updatedAt: site.updatedAt })
+    .from(site)
+    .leftJoin(client, eq(client.id, site.clientId))
+    .where(listWhere(shape))
+    .orderBy(by(sortColumns[shape.sort]), by(site.id))
+    .limit(placeholder("limit"))
+    .offset(placeholder("offset"))
+    .prepare(name);
+}
+
+function countStatement(shape: ListShape, name: string) {
+  return db.select({ n: sql<number>`count(*)::int` }).from(site).where(listWhere(shape)).prepare(name);
+}
+
+/** Prepared statements per shape of the list (which filters, which sort): at most a few dozen, each planned once per connection. */
+const statements = new Map<string, ListStatements>();
+function statementsFor(shape: ListShape): ListStatements {
+  const key = `${shape.q ? "q" : ""}${shape.kind ? "k" : ""}${shape.clientId ? "c" : ""}${shape.scopeClient ? "s" : ""}_${shape.sort}_${shape.dir}`;
+  let found = statements.get(key);
+  if (!found) {
+    found = { page: pageStatement(shape, `sites_page_${key}`), count: countStatement(shape, `sites_count_${key}`) };
+    statements.set(key, found);
+  }
+  return found;
+}
+
 /**
  * One page of sites with the total. Emitter counts are the site's own column, kept by a trigger on
  * the emitter table (migration 0005), so sorting by them is an index scan like the others.
  */
 export async function listSites(scope: Scope, filter: SiteFilter) {
-  const where = and(
-    siteScope(scope),
-    filter.q ? or(ilike(site.name, likePattern(filter.q)), ilike(site.city, likePattern(filter.q)), ilike(site.address, likePattern(filter.q))) : undefined,
-    filter.kind ? eq(site.kind, filter.kind) : undefined,
-    filter.clientId ? eq(site.clientId, filter.clientId) : undefined,
-  );
-  const order = filter.dir === "desc" ? desc(sortColumns[filter.sort]) : asc(sortColumns[filter.sort]);
+  const scopeClient = scope.role === "client";
+  if (scopeClient && !scope.clientId) return { sites: [], total: 0 };
+  const shape: ListShape = { q: Boolean(filter.q), kind: Boolean(filter.kind), clientId: Boolean(filter.clientId), scopeClient, sort: filter.sort, dir: filter.dir };
+  const { page, count } = statementsFor(shape);
+  const values = {
+    organizationId: scope.organizationId,
+    ...(scopeClient ? { scopeClientId: scope.clientId } : {}),
+    ...(filter.q ? { q: likePattern(filter.q) } : {}),
+    ...(filter.kind ? { kind: filter.kind } : {}),
+    ...(filter.clientId ? { clientId: filter.clientId } : {}),
+  };
+  const offset = (filter.page - 1) * filter.pageSize;
   // The page and the count as two queries at once: each can use the organisation's indexes,
   // where a window count over the page would read every matching row first.
-  const [rows, total] = await Promise.all([
-    db
-      .select({
-        id: site.id,
-        name: site.name,
-        kind: site.kind,
-        city: site.city,
-        clientId: site.clientId,
-        clientName: client.name,
-        emitterCount: site.emitterCount,
-        updatedAt: site.updatedAt,
-      })
-      .from(site)
-      .leftJoin(client, eq(client.id, site.clientId))
-      .where(where)
-      .orderBy(order, asc(site.id))
-      .limit(filter.pageSize)
-      .offset((filter.page - 1) * filter.pageSize),
-    countSites(where),
-  ]);
-  return { sites: rows, total };
+  const [rows, [counted]] = await Promise.all([page.execute({ ...values, limit: filter.pageSize, offset }), count.execute(values)]);
+  return { sites: rows, total: counted?.n ?? 0 };
 }
 
-async function countSites(where: ReturnType<typeof and>) {
-  const [row] = await db.select({ n: sql<number>`count(*)::int` }).from(site).where(where);
-  return row?.n ?? 0;
-}
+/** A site of an organisation by id, prepared once (every site page asks it). */
+const siteById = db
+  .select({ site, clientName: client.name })
+  .from(site)
+  .leftJoin(client, eq(client.id, site.clientId))
+  .where(and(eq(site.organizationId, placeholder("organizationId")), eq(site.id, placeholder("siteId"))))
+  .prepare("site_by_id");
 
 /** One site within the scope, or null (another organisation's site is simply not found). */
 export async function findSite(scope: Scope, siteId: string) {
-  const [row] = await db
-    .select({ site, clientName: client.name })
-    .from(site)
-    .leftJoin(client, eq(client.id, site.clientId))
-    .where(and(siteScope(scope), eq(site.id, siteId)));
+  const [row] =
+    scope.role === "client"
+      ? await db.select({ site, clientName: client.name }).from(site).leftJoin(client, eq(client.id, site.clientId)).where(and(siteScope(scope), eq(site.id, siteId)))
+      : await siteById.execute({ organizationId: scope.organizationId, siteId });
   return row ? { ...row.site, clientName: row.clientName } : null;
 }
 

@@ -32,7 +32,8 @@ export const site = pgTable(
   (t) => [
     index("site_org_name_idx").on(t.organizationId, t.name),
     index("site_org_updated_idx").on(t.organizationId, t.updatedAt),
-    index("site_org_emitters_idx").on(t.organizationId, t.emitterCount),
+    // With the id, so a page sorted by emitter count (most sites tie) is read off the index either way.
+    index("site_org_emitters_idx").on(t.organizationId, t.emitterCount, t.id),
     index("site_client_idx").on(t.clientId),
   ],
 );
