@@ -1,10 +1,10 @@
 // The overview's attention list (issue 9 §7), per role, through the overview's loader: a reviewer
 // sees documents in review written by someone else; an engineer sees sites whose inventory changed
 // after the inventory of their latest issued document was frozen; owner and billing see issued
-// certificates expiring within 60 days. Nothing of another organisation shows; client and
-// regulator get no list here (the client's overview is /portal's; filings are another branch's).
+// certificates expiring within 60 days; a regulator the filings addressed to it in the last 30 days.
+// Nothing of another organisation shows; the client gets no list here (its home is /portal).
 import { randomUUID } from "node:crypto";
-import { eq } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { deleteEmitter } from "~/features/emitters/emitters.server";
 import { db, schema } from "~/infra/db.server";
@@ -18,6 +18,17 @@ let a: Org;
 let b: Org;
 const sites: Record<string, string> = {};
 const docs: Record<string, string> = {};
+const filed: { assessmentId?: string } = {};
+
+async function memberIdOf(org: Org, role: "regulator" | "engineer") {
+  const [row] = await db.select({ id: schema.member.id }).from(schema.member).where(and(eq(schema.member.organizationId, org.id), eq(schema.member.userId, org.people[role].userId)));
+  return row.id;
+}
+
+async function fileTo(org: Org, regulatorMemberId: string, siteId: string, assessmentId: string, documentId: string, filedAt: Date, authority: string) {
+  const [row] = await db.insert(schema.filing).values({ organizationId: org.id, siteId, assessmentId, documentId, regulatorMemberId, authority, filedByName: "Fixture", filedAt }).returning();
+  return row.id;
+}
 
 async function makeSite(org: Org, name: string) {
   const [row] = await db.insert(schema.site).values({ organizationId: org.id, name, kind: "rooftop" }).returning();
@@ -56,6 +67,7 @@ beforeAll(async () => {
   for (const name of ["changed", "unchanged", "visits-only", "never-issued", "reissued", "certs"]) sites[name] = await makeSite(a, `Attention <i>${name}</i>`);
   const older = await makeAssessment(a, sites.changed, ago(10));
   docs.changedReport = await makeDocument(a, sites.changed, older, { kind: "report", state: "issued", issuedAt: ago(9), version: 3 });
+  filed.assessmentId = older;
   await inventoryChange(a, sites.changed, "surface", ago(5));
 
   const unchanged = await makeAssessment(a, sites.unchanged, ago(4));
@@ -132,11 +144,34 @@ describe("the overview's attention list", () => {
     }
   });
 
-  it("gives the client and regulator no list here, and an empty list says so", async () => {
-    expect(await attentionOf(a, "client")).toBeNull();
-    expect(await attentionOf(a, "regulator")).toBeNull();
+  it("shows a regulator the filings addressed to it in the last 30 days, newest first, and no one else's", async () => {
+    expect(await attentionOf(a, "regulator")).toMatchObject({ reason: "filing-received", total: 0, items: [] });
+    const regulator = await memberIdOf(a, "regulator");
+    // A second assessment of the same site for a second filing (one filing per assessment and regulator).
+    const newer = await makeAssessment(a, sites.changed, ago(3));
+    const newerReport = await makeDocument(a, sites.changed, newer, { kind: "report", state: "issued", issuedAt: ago(2), version: 4 });
+    const recent = await fileTo(a, regulator, sites.changed, newer, newerReport, ago(1), "Spectrum Safety Office");
+    const earlier = await fileTo(a, regulator, sites.changed, filed.assessmentId!, docs.changedReport, ago(5), "Harbour Radio Authority");
+    // Too old for the list, and one addressed to another member: neither shows.
+    const oldAssessment = await makeAssessment(a, sites.unchanged, ago(60));
+    const oldReport = await makeDocument(a, sites.unchanged, oldAssessment, { kind: "report", state: "superseded", issuedAt: ago(59) });
+    await fileTo(a, regulator, sites.unchanged, oldAssessment, oldReport, ago(45), "Spectrum Safety Office");
+    await fileTo(a, await memberIdOf(a, "engineer"), sites.changed, newer, newerReport, ago(1), "Not the regulator");
+    const list = await attentionOf(a, "regulator");
+    expect(list?.items.map((i) => i.key)).toEqual([`filing:${recent}`, `filing:${earlier}`]);
+    expect(list?.items[0]).toMatchObject({ to: `/filings?siteId=${sites.changed}`, title: "Attention <i>changed</i>: assessment with its report v4" });
+    expect(list?.items[1].detail).toContain("Filed to Harbour Radio Authority");
+    expect(await attentionOf(b, "regulator")).toMatchObject({ total: 0, items: [] });
+  });
+
+  it("sends the client to its portal instead, and an empty list says so", async () => {
+    const toPortal = await attentionOf(a, "client").then(
+      () => null,
+      (thrown: unknown) => (thrown instanceof Response ? thrown.headers.get("location") : String(thrown)),
+    );
+    expect(toPortal).toBe("/portal");
     const lone = await createOrg("attention-empty");
-    for (const role of ["owner", "engineer", "reviewer", "billing"] as const) expect(await attentionOf(lone, role)).toMatchObject({ total: 0, items: [] });
+    for (const role of ["owner", "engineer", "reviewer", "billing", "regulator"] as const) expect(await attentionOf(lone, role)).toMatchObject({ total: 0, items: [] });
   });
 
   it("caps the list and counts the rest", async () => {

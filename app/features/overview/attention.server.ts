@@ -4,14 +4,13 @@
 //   reviewer         documents in review that someone else wrote (the two-person rule: those they may issue)
 //   engineer         sites whose inventory changed after the inventory of their latest issued document was frozen
 //   owner, billing   issued certificates expiring within 60 days (or already expired and not reissued)
-//   regulator        filings received: not built on this branch (the filings table belongs to issue 9 §5);
-//                    add a `regulator` entry to `queries` below when it lands.
+//   regulator        filings addressed to this regulator member in the last 30 days, newest first
 import { and, asc, desc, eq, inArray, isNotNull, isNull, lt, ne, or, sql } from "drizzle-orm";
 import { db, schema } from "~/infra/db.server";
 import type { Role } from "~/lib/roles";
 import { attentionItem, type AttentionList, type AttentionRow } from "./attention";
 
-const { document, site, assessment, auditEvent } = schema;
+const { document, site, assessment, auditEvent, filing, member } = schema;
 
 export const ATTENTION_LIMIT = 10;
 /** The audit entities that are a site's inventory (what an assessment freezes). */
@@ -78,15 +77,34 @@ const expiring = db
   .limit(ATTENTION_LIMIT)
   .prepare("attention_certificates");
 
+/** Filings sent to the signed-in regulator member (its inbox), received in the last 30 days. */
+const received = db
+  .select({ id: filing.id, siteId: filing.siteId, siteName: site.name, kind: sql<string>`'report'`, version: document.version, at: filing.filedAt, who: filing.authority, total })
+  .from(filing)
+  .innerJoin(member, eq(member.id, filing.regulatorMemberId))
+  .innerJoin(site, eq(site.id, filing.siteId))
+  .innerJoin(document, eq(document.id, filing.documentId))
+  .where(
+    and(
+      eq(filing.organizationId, organizationId),
+      eq(member.userId, sql.placeholder("userId")),
+      sql`${filing.filedAt} > now() - interval '30 days'`,
+    ),
+  )
+  .orderBy(desc(filing.filedAt), asc(filing.id))
+  .limit(ATTENTION_LIMIT)
+  .prepare("attention_regulator");
+
 type Reason = AttentionRow["reason"];
 const queries: Partial<Record<Role, { reason: Reason; run: (member: { organizationId: string; userId: string }) => Promise<(Omit<AttentionRow, "reason"> & { total: number })[]> }>> = {
   reviewer: { reason: "review", run: (m) => inReview.execute({ organizationId: m.organizationId, userId: m.userId }) as never },
   engineer: { reason: "inventory-changed", run: (m) => changedSites.execute({ organizationId: m.organizationId }) as never },
   owner: { reason: "certificate-expiring", run: (m) => expiring.execute({ organizationId: m.organizationId }) as never },
   billing: { reason: "certificate-expiring", run: (m) => expiring.execute({ organizationId: m.organizationId }) as never },
+  regulator: { reason: "filing-received", run: (m) => received.execute({ organizationId: m.organizationId, userId: m.userId }) as never },
 };
 
-/** The attention list of a member's role, or null for a role that has none (client, regulator for now). */
+/** The attention list of a member's role, or null for a role that has none (the client, whose home is /portal). */
 export async function attentionFor(role: Role, member: { organizationId: string; userId: string }, now = new Date()): Promise<AttentionList | null> {
   const query = queries[role];
   if (!query) return null;

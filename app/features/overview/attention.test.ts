@@ -24,4 +24,10 @@ describe("attentionItem", () => {
     expect(attentionItem({ ...base, reason: "certificate-expiring", at: "2026-12-06T11:00:00Z" }, now).detail).toBe("Expires on 6 Dec 2026, in 1 day.");
     expect(attentionItem({ ...base, reason: "certificate-expiring", at: "2026-11-30T00:00:00Z" }, now).detail).toBe("Expired on 30 Nov 2026; not reissued.");
   });
+
+  it("links a filing received to the regulator's inbox for that site, naming the authority", () => {
+    const item = attentionItem({ ...base, id: "f1", kind: "report", reason: "filing-received", at: "2026-12-03T08:00:00Z", who: "Spectrum Safety Office" }, now);
+    expect(item).toMatchObject({ key: "filing:f1", to: "/filings?siteId=s1", title: "Harbour <b>Roof</b>: assessment with its report v2" });
+    expect(item.detail).toBe("Filed to Spectrum Safety Office on 3 Dec 2026; its bundle is in your filings.");
+  });
 });

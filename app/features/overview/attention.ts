@@ -5,16 +5,16 @@ import type { DocumentKind } from "~/infra/db/schema/documents";
 import { formatDate } from "~/lib/dates";
 
 export type AttentionRow = {
-  reason: "review" | "inventory-changed" | "certificate-expiring";
-  /** The document (in review, expiring, or the latest issued one of a changed site). */
+  reason: "review" | "inventory-changed" | "certificate-expiring" | "filing-received";
+  /** The document (in review, expiring, or the latest issued one of a changed site), or the filing. */
   id: string;
   siteId: string;
   siteName: string;
   kind: string;
   version: number;
-  /** Submitted (review), last inventory change (inventory-changed), expiry (certificate-expiring). */
+  /** Submitted (review), last inventory change (inventory-changed), expiry (certificate-expiring), filed (filing-received). */
   at: Date | string | null;
-  /** The document's author (review). */
+  /** The document's author (review), the authority a filing is addressed to (filing-received). */
   who?: string | null;
 };
 
@@ -54,6 +54,15 @@ export function attentionItem(row: AttentionRow, now: Date): AttentionItem {
       const when = !at || days === null ? "Expiry date unknown." : days <= 0 ? `Expired on ${formatDate(at)}; not reissued.` : `Expires on ${formatDate(at)}, in ${plural(days, "day", "days")}.`;
       return { key: `certificate:${row.id}`, reason: row.reason, to: documentPath, title: `${named}, ${row.siteName}`, detail: when, at: iso };
     }
+    case "filing-received":
+      return {
+        key: `filing:${row.id}`,
+        reason: row.reason,
+        to: `/filings?siteId=${encodeURIComponent(row.siteId)}`,
+        title: `${row.siteName}: assessment with its ${named.toLowerCase()}`,
+        detail: `Filed${row.who ? ` to ${row.who}` : ""}${at ? ` on ${formatDate(at)}` : ""}; its bundle is in your filings.`,
+        at: iso,
+      };
   }
 }
 
@@ -62,4 +71,5 @@ export const attentionWords: Record<AttentionRow["reason"], { title: string; emp
   review: { title: "Waiting for your review", empty: "No document written by someone else waits for review." },
   "inventory-changed": { title: "Sites changed since their issued documents", empty: "No site's inventory has changed since its latest issued document." },
   "certificate-expiring": { title: "Certificates expiring within 60 days", empty: "No issued certificate expires within 60 days." },
+  "filing-received": { title: "Filings received in the last 30 days", empty: "Nothing has been filed to you in the last 30 days." },
 };
