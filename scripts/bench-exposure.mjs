@@ -51,10 +51,10 @@ const toggle = page.getByLabel("NW-A19 on");
 for (let i = 0; i < runs; i++) {
   if (i % 2 === 0) {
     await toggle.uncheck();
-    await page.locator("section[data-what-if=on][data-what-if-pending=false]").waitFor();
+    await page.locator("[data-testid=exposure-results][data-what-if=on][data-what-if-pending=false]").waitFor();
   } else {
     await toggle.check();
-    await page.locator("section[data-what-if=off]").waitFor();
+    await page.locator("[data-testid=exposure-results][data-what-if=off]").waitFor();
     // Back to the stored inventory draws the loader's result: no worker round trip to time.
   }
   await page.waitForTimeout(150);
@@ -62,14 +62,14 @@ for (let i = 0; i < runs; i++) {
 const power = page.locator("[data-emitter-row='SM-3-2100'] input[id$='-power']");
 for (let i = 0; i < runs; i++) {
   await power.fill(String(-(i % 6) - 1));
-  await page.locator("section[data-what-if=on][data-what-if-pending=false]").waitFor();
+  await page.locator("[data-testid=exposure-results][data-what-if=on][data-what-if-pending=false]").waitFor();
   await page.waitForTimeout(150);
 }
 await page.evaluate(() => (window.__lastSwitch = window.__exposureTimings.length));
 const tilt = page.locator("[data-emitter-row='SM-3-2100'] input[id$='-tilt']");
 for (let i = 0; i < Math.ceil(runs / 2); i++) {
   await tilt.fill(String(5 + i));
-  await page.locator("section[data-what-if=on][data-what-if-pending=false]").waitFor();
+  await page.locator("[data-testid=exposure-results][data-what-if=on][data-what-if-pending=false]").waitFor();
   await page.waitForTimeout(150);
 }
 const timings = await page.evaluate(() => ({ all: window.__exposureTimings, split: window.__lastSwitch }));

@@ -1,13 +1,14 @@
-// One level's exposure map in SVG, on the site plan: filled bands of total % of limit (viridis,
-// log axis), labelled contour lines, the four classes as outlines and hatching that read in
+// One level's exposure map in SVG, on the site plan: the colour field of total % of limit (viridis,
+// log axis, one small image; field-image.ts), labelled contour lines, the four classes as outlines and hatching that read in
 // greyscale, obstructions and access points of the level, emitters with azimuth arrows, readings
 // against predictions, the worst point, and the value under the pointer.
 import { memo, useId, useMemo, useState } from "react";
 import { pointInPolygon, type EmitterInput } from "~/engine";
 import { SitePlan } from "~/features/layout/site-plan";
 import type { PlanFrame, XY } from "~/features/layout/plan-frame";
-import { bandColour, bandThresholds, formatPercent } from "./colour-scale";
+import { formatPercent } from "./colour-scale";
 import { classShapes, contourShapes, extendOutside, labelCandidates, ringLength, type Ring } from "./contours";
+import { fieldImage } from "./field-image";
 import type { AreaView, EmitterView, ExposureResult } from "./exposure-result";
 import type { ExposureOptions } from "./options";
 import { pointValue, type PointValue } from "./point-value";
@@ -118,12 +119,16 @@ export function ExposureLevelMap({ title, engineEmitters, elevationM, areas, res
 
 type Geometry = ReturnType<typeof surfaceGeometry>;
 
-/** The colour bands, class hatching and outlines, and contour lines, clipped to the surfaces; redrawn only when the values change. */
+/** The colour field, class hatching and outlines, and contour lines, clipped to the surfaces; redrawn only when the values change. */
 const FieldLayers = memo(function FieldLayers({ frame, geometry, uid }: { frame: PlanFrame; geometry: Geometry[]; uid: string }) {
   return (
     <g clipPath={`url(#${uid}-clip)`}>
       <rect x={0} y={0} width={frame.width} height={frame.height} className="fill-sheet" />
-      {geometry.map((g, k) => g.bands.map((b) => (b.rings.length ? <path key={`${k}-${b.value}`} d={pathOf(frame, b.rings)} fill={bandColour(b.value)} fillRule="evenodd" /> : null)))}
+      {geometry.map((g, k) => {
+        // The colour field: one pixel per grid node, scaled up smoothly (see field-image.ts).
+        const [x, y] = frame.toPx(g.field.x, g.field.y + g.field.height);
+        return <image key={`f${k}`} href={g.field.href} x={x} y={y} width={g.field.width * frame.scale} height={g.field.height * frame.scale} preserveAspectRatio="none" />;
+      })}
       {geometry.map((g, k) => (
         <g key={`c${k}`}>
           {g.classes[1].rings.length ? <path d={pathOf(frame, g.classes[1].rings)} fill={`url(#${uid}-h2)`} fillRule="evenodd" /> : null}
@@ -152,7 +157,7 @@ function surfaceGeometry(a: AreaView) {
   const values = extendOutside(a.percent, inside, a.grid.nx, a.grid.ny);
   const classValues = extendOutside(a.classes.map((c) => (c === 255 ? 0 : c)), inside, a.grid.nx, a.grid.ny);
   return {
-    bands: contourShapes(a.grid, values, bandThresholds()),
+    field: fieldImage(a.grid, values),
     lines: contourShapes(a.grid, values, CONTOUR_PERCENTS),
     classes: classShapes(a.grid, Array.from(classValues)),
   };

@@ -10,3 +10,4 @@ export * from "./tokens";
 export * from "./auth-throttle";
 export * from "./assessments";
 export * from "./documents";
+export * from "./exposure-cache";
