@@ -7,7 +7,8 @@ import type { EntryContext, RouterContextProvider } from "react-router";
 import { ServerRouter } from "react-router";
 import { contentSecurityPolicy, createNonce } from "~/infra/content-security-policy.server";
 
-export const streamTimeout = 5_000;
+// Deferred data may take this long (the Exposure page computing a large site on a busy machine).
+export const streamTimeout = 60_000;
 
 // The background work (PDF rendering, e-mail), started by server/index.mjs unless WORKER=off.
 export { startBackgroundWork, stopBackgroundWork } from "~/features/documents/worker.server";
@@ -48,7 +49,7 @@ export default function handleRequest(
         callback();
       },
     });
-    const timeoutId = setTimeout(() => abort(), streamTimeout + 1000);
+    const timeoutId = setTimeout(() => abort(), 6_000);
 
     const { pipe, abort } = renderToPipeableStream(<ServerRouter context={routerContext} url={request.url} nonce={nonce} />, {
       nonce,
