@@ -170,14 +170,18 @@ const worstText = (w: AreaView) => `worst ${formatPercent(w.worstPercent)}`;
 const readingText = (r: LevelReading) => `${r.label.split(" ")[0]} ×${r.ratio === null ? "–" : r.ratio.toFixed(2)}`;
 const emitterText = (e: EmitterView) => `${e.label}${e.active ? "" : " (off)"}`;
 const obstructionText = (o: MapObstruction) => `${o.name} · ${o.heightM} m`;
-/** An obstruction's label inside its outline: at the top, else the bottom, else the middle (left edge and top of the text, px). */
+/** An obstruction's label inside its outline: at the top, else the bottom, else rows between (centred, right, left), else just outside (left edge and top of the text, px). */
 function obstructionPlaces(frame: PlanFrame, o: MapObstruction): [number, number][] {
   const w = textWidth(obstructionText(o), 10);
   const xs = o.polygon.map((p) => frame.toPx(p[0], p[1]));
-  const [cx, cy] = frame.toPx(...centroid(o.polygon));
+  const [cx] = frame.toPx(...centroid(o.polygon));
   const top = Math.min(...xs.map((p) => p[1]));
   const bottom = Math.max(...xs.map((p) => p[1]));
-  return [[cx - w / 2, top + 5], [cx - w / 2, bottom - 17], [cx - w / 2, cy - 6], [cx - w / 2, top - 15], [cx - w / 2, bottom + 3]];
+  const right = Math.max(...xs.map((p) => p[0])) - w - 4;
+  const left = Math.min(...xs.map((p) => p[0])) + 4;
+  const rows: number[] = [top + 5, bottom - 17];
+  for (let y = top + 19; y < bottom - 17; y += 14) rows.push(y);
+  return [...rows.flatMap((y) => [[cx - w / 2, y], [right, y], [left, y]] as [number, number][]), [cx - w / 2, top - 15], [cx - w / 2, bottom + 3]];
 }
 const ARROW_PX = 22;
 const arrowEnd = (frame: PlanFrame, e: EmitterView): [number, number] => {

@@ -3,8 +3,8 @@
 // 15948:2004 (PNG), §11.2 (IHDR, PLTE, tRNS, IDAT); zlib stream: RFC 1950, stored blocks RFC 1951 §3.2.4.
 import { inflateSync } from "node:zlib";
 import { describe, expect, it } from "vitest";
-import { bandThresholds } from "./colour-scale";
-import { bandIndex, fieldImage } from "./field-image";
+import { colourOf } from "./colour-scale";
+import { fieldImage, LEVELS, levelIndex, paletteColour } from "./field-image";
 
 const decode = (href: string) => {
   const png = Buffer.from(href.replace(/^data:image\/png;base64,/, ""), "base64");
@@ -18,17 +18,22 @@ const decode = (href: string) => {
   return { width: chunks.IHDR.readUInt32BE(0), height: chunks.IHDR.readUInt32BE(4), type: chunks.IHDR[9], pixels: inflateSync(chunks.IDAT), trns: chunks.tRNS };
 };
 
-describe("bandIndex", () => {
-  it("is 0 below 1 % and 1 + the band at or below the value, the last band above 1000 %", () => {
-    const t = bandThresholds();
-    expect(bandIndex(0)).toBe(0);
-    expect(bandIndex(0.99)).toBe(0);
-    expect(bandIndex(1)).toBe(1);
-    expect(bandIndex(t[3])).toBe(4);
-    expect(bandIndex(t[3] * 1.0001)).toBe(4);
-    expect(bandIndex(t[4] * 0.9999)).toBe(4);
-    expect(bandIndex(1e6)).toBe(t.length);
-    expect(bandIndex(Number.NaN)).toBe(0);
+describe("levelIndex", () => {
+  it("is 0 below 1 %, rises along the log axis, and holds the last level from 1000 % up", () => {
+    expect(levelIndex(0)).toBe(0);
+    expect(levelIndex(0.99)).toBe(0);
+    expect(levelIndex(Number.NaN)).toBe(0);
+    expect(levelIndex(1)).toBe(1);
+    // 10 % is a third of the way along 1 %–1000 % on a log axis.
+    expect(levelIndex(10)).toBe(1 + Math.floor(LEVELS / 3));
+    expect(levelIndex(999)).toBe(LEVELS);
+    expect(levelIndex(1e6)).toBe(LEVELS);
+    for (let v = 1; v < 1000; v *= 1.1) expect(levelIndex(v * 1.1)).toBeGreaterThanOrEqual(levelIndex(v));
+  });
+
+  it("colours each level as the map's scale does at the level's middle", () => {
+    const hex = (c: [number, number, number]) => `#${c.map((v) => v.toString(16).padStart(2, "0")).join("")}`;
+    expect(hex(paletteColour(levelIndex(10)))).toBe(colourOf(10 ** ((Math.floor(LEVELS / 3) + 0.5) * (3 / LEVELS))));
   });
 });
 
@@ -42,7 +47,7 @@ describe("fieldImage", () => {
     const { width, height, type, pixels, trns } = decode(img.href);
     expect([width, height, type]).toEqual([3, 2, 3]);
     expect(trns[0]).toBe(0); // below the scale: transparent
-    expect([...pixels]).toEqual([0, bandIndex(5), bandIndex(50), bandIndex(500), 0, bandIndex(0.5), bandIndex(1), bandIndex(2000)]);
+    expect([...pixels]).toEqual([0, levelIndex(5), levelIndex(50), levelIndex(500), 0, levelIndex(0.5), levelIndex(1), levelIndex(2000)]);
   });
 
   it("splits large grids into stored blocks that zlib reads back whole", () => {
@@ -50,7 +55,7 @@ describe("fieldImage", () => {
     const values = Array.from({ length: 400 * 300 }, (_, k) => (k % 997) + 0.5);
     const { pixels } = decode(fieldImage(g, values).href);
     expect(pixels.length).toBe(401 * 300);
-    expect(pixels[1 + 5]).toBe(bandIndex(values[299 * 400 + 5]));
+    expect(pixels[1 + 5]).toBe(levelIndex(values[299 * 400 + 5]));
   });
 
   it("gives the same string every time (the server's markup equals the browser's)", () => {

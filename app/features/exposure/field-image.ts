@@ -1,14 +1,19 @@
-// The map's colour field as one small image instead of a filled SVG path per band: each grid node
-// becomes one pixel of an indexed PNG coloured with its band's colour (the same bands and colours
-// as the legend; below 1 % transparent), placed so that pixel centres sit on the grid's nodes, and
-// scaled up by the browser. Drawing 25 band outlines through marching squares took most of a
+// The map's colour field as one small image instead of a filled SVG path per colour band: each
+// grid node becomes one pixel of an indexed PNG whose 255 colours step along the map's scale (log
+// axis, 1 % to 1000 %, reversed viridis, as the legend; below 1 % transparent), placed so that
+// pixel centres sit on the grid's nodes, and scaled up smoothly by the browser, so the colour runs
+// on continuously between nodes. Drawing 25 band outlines through marching squares took most of a
 // what-if redraw; this takes a few milliseconds. Pure and deterministic (uncompressed deflate, our
 // own base64), so the server's markup and the browser's first render are the same string.
-import { bandColour, bandThresholds } from "./colour-scale";
+import { colourOf, scalePosition, SCALE_MAX_PERCENT, SCALE_MIN_PERCENT } from "./colour-scale";
 import type { GridGeometry } from "./contours";
 
-const THRESHOLDS = bandThresholds();
-const PALETTE: [number, number, number][] = [[255, 255, 255], ...THRESHOLDS.map((t) => rgb(bandColour(t)))];
+/** Colour steps along the scale (an indexed PNG holds 256 colours; index 0 is "below the scale"). */
+export const LEVELS = 255;
+const PALETTE: [number, number, number][] = [
+  [255, 255, 255],
+  ...Array.from({ length: LEVELS }, (_, k) => rgb(colourOf(SCALE_MIN_PERCENT * (SCALE_MAX_PERCENT / SCALE_MIN_PERCENT) ** ((k + 0.5) / LEVELS))!)),
+];
 
 function rgb(colour: string): [number, number, number] {
   const hex = /^#([0-9a-f]{2})([0-9a-f]{2})([0-9a-f]{2})$/i.exec(colour);
@@ -18,18 +23,14 @@ function rgb(colour: string): [number, number, number] {
   return [Number(m[1]), Number(m[2]), Number(m[3])];
 }
 
-/** Palette index of a value: 0 below the scale (transparent), else 1 + its band (the last band holds everything above). */
-export function bandIndex(percent: number): number {
-  if (!(percent >= THRESHOLDS[0])) return 0;
-  let lo = 0;
-  let hi = THRESHOLDS.length - 1;
-  while (lo < hi) {
-    const mid = (lo + hi + 1) >> 1;
-    if (percent >= THRESHOLDS[mid]) lo = mid;
-    else hi = mid - 1;
-  }
-  return lo + 1;
+/** Palette index of a value: 0 below the scale (transparent), else 1 … LEVELS along the log axis (the last holds everything from 1000 % up). */
+export function levelIndex(percent: number): number {
+  if (!(percent >= SCALE_MIN_PERCENT)) return 0;
+  return Math.min(LEVELS, 1 + Math.floor(scalePosition(percent) * LEVELS));
 }
+
+/** The colour (r, g, b) of a palette index, for tests and the legend. */
+export const paletteColour = (index: number) => PALETTE[index];
 
 export type FieldImage = { href: string; x: number; y: number; width: number; height: number };
 
@@ -40,7 +41,7 @@ export function fieldImage(g: GridGeometry, values: ArrayLike<number>): FieldIma
   for (let row = 0; row < ny; row++) {
     const j = ny - 1 - row; // PNG rows run top (north) to bottom
     const o = row * (nx + 1); // filter byte 0, then the row
-    for (let i = 0; i < nx; i++) raw[o + 1 + i] = bandIndex(values[j * nx + i]);
+    for (let i = 0; i < nx; i++) raw[o + 1 + i] = levelIndex(values[j * nx + i]);
   }
   const png = encodePng(nx, ny, raw);
   return { href: `data:image/png;base64,${base64(png)}`, x: g.x0 - g.step / 2, y: g.y0 - g.step / 2, width: nx * g.step, height: ny * g.step };
