@@ -36,8 +36,9 @@ test("Exposure from the map to two compared assessments", async ({ page }, info)
   test.setTimeout(420_000);
   await signIn(page, "engineer@demo.isotrope.test");
   await visit(page, "/sites");
+  const site = (await page.getByRole("link", { name: "Calloway House" }).first().getAttribute("href"))!;
+  expect(site).toMatch(/^\/sites\/[0-9a-f-]+$/);
   await page.getByRole("link", { name: "Calloway House" }).first().click();
-  const site = new URL(page.url()).pathname;
   const sections = page.getByRole("navigation", { name: "Site sections" });
 
   // 1. The map and the worst point.
@@ -50,7 +51,7 @@ test("Exposure from the map to two compared assessments", async ({ page }, info)
   await expect(page.getByTestId("site-worst")).toContainText("Main roof");
   const mainMap = page.locator("figure").first();
   await expect(mainMap.getByTestId("worst-marker")).toContainText(`worst ${before}`);
-  const markerBefore = await mainMap.getByTestId("worst-marker").innerText();
+  const markerBefore = (await mainMap.getByTestId("worst-marker").textContent()) ?? "";
   const fieldBefore = await mainMap.locator("image").first().getAttribute("href");
   await shot(page, info, "01-exposure");
 

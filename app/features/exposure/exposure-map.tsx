@@ -6,7 +6,7 @@ import { memo, useId, useMemo, useState } from "react";
 import { pointInPolygon, type EmitterInput } from "~/engine";
 import { SitePlan } from "~/features/layout/site-plan";
 import type { PlanFrame, XY } from "~/features/layout/plan-frame";
-import { formatPercent } from "./colour-scale";
+import { formatPercent, SCALE_MIN_PERCENT } from "./colour-scale";
 import { classShapes, contourShapes, extendOutside, labelCandidates, ringLength, type Ring } from "./contours";
 import { fieldImage } from "./field-image";
 import { around, overlapArea, placeLabels, segmentBoxes, textWidth, type Box, type PlacedLabel } from "./map-labels";
@@ -122,9 +122,17 @@ const FieldLayers = memo(function FieldLayers({ frame, geometry, uid }: { frame:
     <g clipPath={`url(#${uid}-clip)`}>
       <rect x={0} y={0} width={frame.width} height={frame.height} className="fill-sheet" />
       {geometry.map((g, k) => {
-        // The colour field: one pixel per grid node, scaled up smoothly (see field-image.ts).
+        // The colour field: one pixel per grid node, scaled up smoothly (see field-image.ts), inside the smoothed 1 % contour.
+        if (!g.floor.rings.length) return null;
         const [x, y] = frame.toPx(g.field.x, g.field.y + g.field.height);
-        return <image key={`f${k}`} href={g.field.href} x={x} y={y} width={g.field.width * frame.scale} height={g.field.height * frame.scale} preserveAspectRatio="none" />;
+        return (
+          <g key={`f${k}`}>
+            <clipPath id={`${uid}-floor-${k}`}>
+              <path d={pathOf(frame, g.floor.rings)} clipRule="evenodd" />
+            </clipPath>
+            <image clipPath={`url(#${uid}-floor-${k})`} href={g.field.href} x={x} y={y} width={g.field.width * frame.scale} height={g.field.height * frame.scale} preserveAspectRatio="none" />
+          </g>
+        );
       })}
       {geometry.map((g, k) => (
         <g key={`c${k}`}>
@@ -224,6 +232,7 @@ function surfaceGeometry(a: AreaView) {
   const classValues = extendOutside(a.classes.map((c) => (c === 255 ? 0 : c)), inside, a.grid.nx, a.grid.ny);
   return {
     field: fieldImage(a.grid, values),
+    floor: contourShapes(a.grid, values, [SCALE_MIN_PERCENT])[0],
     lines: contourShapes(a.grid, values, CONTOUR_PERCENTS),
     classes: classShapes(a.grid, Array.from(classValues)),
   };

@@ -1,6 +1,6 @@
 // A facade as an elevation strip: distance along the facade (from its first end) across, height
 // up, on the map's colour scale, with the 100 % line, the class outlines and the worst point.
-import { formatPercent } from "./colour-scale";
+import { formatPercent, SCALE_MIN_PERCENT } from "./colour-scale";
 import { classShapes, contourShapes, type Ring } from "./contours";
 import type { FacadeView } from "./exposure-result";
 import { fieldImage } from "./field-image";
@@ -24,6 +24,7 @@ export function FacadeStrip({ facade, width = 960 }: { facade: FacadeView; width
   const pathOf = (rings: Ring[]) => rings.map((r) => r.map((p, i) => `${i ? "L" : "M"}${toPx(p[0], p[1]).map((v) => v.toFixed(1)).join(" ")}`).join("") + "Z").join("");
   const field = fieldImage(g, facade.percent);
   const [fx, fy] = toPx(field.x, field.y + field.height);
+  const [floor] = contourShapes(g, facade.percent, [SCALE_MIN_PERCENT]);
   const [hundred] = contourShapes(g, facade.percent, [100]);
   const classes = classShapes(g, facade.classes);
   const ticks = (lo: number, hi: number) => {
@@ -43,7 +44,10 @@ export function FacadeStrip({ facade, width = 960 }: { facade: FacadeView; width
         </clipPath>
       </defs>
       <g clipPath={`url(#${clipId})`}>
-        <image href={field.href} x={fx} y={fy} width={field.width * scale} height={field.height * scale} preserveAspectRatio="none" />
+        <clipPath id={`${clipId}-floor`}>
+          <path d={pathOf(floor.rings)} clipRule="evenodd" />
+        </clipPath>
+        {floor.rings.length ? <image clipPath={`url(#${clipId}-floor)`} href={field.href} x={fx} y={fy} width={field.width * scale} height={field.height * scale} preserveAspectRatio="none" /> : null}
         {classes.map((c) => (c.rings.length ? <path key={c.value} d={pathOf(c.rings)} fill="none" className="stroke-ink-900" strokeWidth={c.value === 1 ? 1.4 : 2.2} strokeDasharray={c.value === 1 ? "6 3" : undefined} /> : null))}
         {hundred.rings.length ? <path d={pathOf(hundred.rings)} fill="none" className="stroke-ink-900" strokeWidth={1.6} /> : null}
       </g>

@@ -15,7 +15,7 @@ const decode = (href: string) => {
     chunks[png.subarray(at + 4, at + 8).toString("latin1")] = png.subarray(at + 8, at + 8 + len);
     at += 12 + len;
   }
-  return { width: chunks.IHDR.readUInt32BE(0), height: chunks.IHDR.readUInt32BE(4), type: chunks.IHDR[9], pixels: inflateSync(chunks.IDAT), trns: chunks.tRNS };
+  return { width: chunks.IHDR.readUInt32BE(0), height: chunks.IHDR.readUInt32BE(4), type: chunks.IHDR[9], pixels: inflateSync(chunks.IDAT), plte: chunks.PLTE };
 };
 
 describe("levelIndex", () => {
@@ -44,9 +44,10 @@ describe("fieldImage", () => {
     const values = [0.5, 1, 2000, 5, 50, 500];
     const img = fieldImage(g, values);
     expect(img).toMatchObject({ x: 9.75, y: 19.75, width: 1.5, height: 1 });
-    const { width, height, type, pixels, trns } = decode(img.href);
+    const { width, height, type, pixels, plte } = decode(img.href);
     expect([width, height, type]).toEqual([3, 2, 3]);
-    expect(trns[0]).toBe(0); // below the scale: transparent
+    expect(plte.length).toBe(3 * (LEVELS + 1));
+    expect([...plte.subarray(0, 3)]).toEqual([...plte.subarray(3, 6)]); // below the scale: the first step's colour (the map clips it away at the 1 % contour)
     expect([...pixels]).toEqual([0, levelIndex(5), levelIndex(50), levelIndex(500), 0, levelIndex(0.5), levelIndex(1), levelIndex(2000)]);
   });
 

@@ -1,6 +1,8 @@
 // The map's colour field as one small image instead of a filled SVG path per colour band: each
 // grid node becomes one pixel of an indexed PNG whose 255 colours step along the map's scale (log
-// axis, 1 % to 1000 %, reversed viridis, as the legend; below 1 % transparent), placed so that
+// axis, 1 % to 1000 %, reversed viridis, as the legend; below 1 % the 1 % colour, for the map clips
+// the image to the smoothed 1 % contour, so the unfilled area has the contour's edge, not the
+// cells' staircase), placed so that
 // pixel centres sit on the grid's nodes, and scaled up smoothly by the browser, so the colour runs
 // on continuously between nodes. Drawing 25 band outlines through marching squares took most of a
 // what-if redraw; this takes a few milliseconds. Pure and deterministic (uncompressed deflate, our
@@ -8,12 +10,10 @@
 import { colourOf, scalePosition, SCALE_MAX_PERCENT, SCALE_MIN_PERCENT } from "./colour-scale";
 import type { GridGeometry } from "./contours";
 
-/** Colour steps along the scale (an indexed PNG holds 256 colours; index 0 is "below the scale"). */
+/** Colour steps along the scale (an indexed PNG holds 256 colours; index 0 is "below the scale", drawn as the first step and clipped away). */
 export const LEVELS = 255;
-const PALETTE: [number, number, number][] = [
-  [255, 255, 255],
-  ...Array.from({ length: LEVELS }, (_, k) => rgb(colourOf(SCALE_MIN_PERCENT * (SCALE_MAX_PERCENT / SCALE_MIN_PERCENT) ** ((k + 0.5) / LEVELS))!)),
-];
+const STEPS: [number, number, number][] = Array.from({ length: LEVELS }, (_, k) => rgb(colourOf(SCALE_MIN_PERCENT * (SCALE_MAX_PERCENT / SCALE_MIN_PERCENT) ** ((k + 0.5) / LEVELS))!));
+const PALETTE: [number, number, number][] = [STEPS[0], ...STEPS];
 
 function rgb(colour: string): [number, number, number] {
   const hex = /^#([0-9a-f]{2})([0-9a-f]{2})([0-9a-f]{2})$/i.exec(colour);
@@ -54,8 +54,7 @@ function encodePng(width: number, height: number, raw: Uint8Array): Uint8Array {
   dv.setUint32(4, height);
   ihdr.set([8, 3, 0, 0, 0], 8); // 8-bit, indexed colour
   const plte = Uint8Array.from(PALETTE.flat());
-  const trns = Uint8Array.from(PALETTE, (_, k) => (k === 0 ? 0 : 255));
-  const chunks = [chunk("IHDR", ihdr), chunk("PLTE", plte), chunk("tRNS", trns), chunk("IDAT", zlibStored(raw)), chunk("IEND", new Uint8Array(0))];
+  const chunks = [chunk("IHDR", ihdr), chunk("PLTE", plte), chunk("IDAT", zlibStored(raw)), chunk("IEND", new Uint8Array(0))];
   const out = new Uint8Array(8 + chunks.reduce((s, c) => s + c.length, 0));
   out.set([137, 80, 78, 71, 13, 10, 26, 10]);
   let at = 8;
