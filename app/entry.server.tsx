@@ -1,12 +1,14 @@
 // React Router's Node entry, with one addition: a nonce per HTML response, given to React Router's
 // inline scripts and named in the page's Content-Security-Policy.
-import { Writable } from "node:stream";
+import { PassThrough, Writable } from "node:stream";
+import { createReadableStreamFromReadable } from "@react-router/node";
 import { renderToPipeableStream } from "react-dom/server";
 import type { EntryContext, RouterContextProvider } from "react-router";
 import { ServerRouter } from "react-router";
 import { contentSecurityPolicy, createNonce } from "~/infra/content-security-policy.server";
 
-export const streamTimeout = 5_000;
+// Deferred data may take this long (the Exposure page computing a large site on a busy machine).
+export const streamTimeout = 60_000;
 
 // The background work (PDF rendering, e-mail), started by server/index.mjs unless WORKER=off.
 export { startBackgroundWork, stopBackgroundWork } from "~/features/documents/worker.server";
@@ -24,8 +26,11 @@ export default function handleRequest(
     return new Response(null, { status: responseStatusCode, headers: responseHeaders });
   }
 
-  // Every loader has resolved before rendering starts (no page streams deferred data), so the
-  // document is rendered whole and sent as one buffer with its length: one socket write instead
+  // A page that defers data (the Exposure page while its result is computed) streams: the shell
+  // first, the deferred parts as they resolve.
+  if (hasDeferredData(routerContext)) return streamed(request, responseStatusCode, responseHeaders, routerContext, nonce);
+
+  // Every other page's loaders have resolved before rendering starts, so the document is rendered whole and sent as one buffer with its length: one socket write instead
   // of one per React chunk, which was a tenth of a signed-in page's server time.
   return new Promise<Response>((resolve, reject) => {
     let shellRendered = false;
@@ -44,7 +49,7 @@ export default function handleRequest(
         callback();
       },
     });
-    const timeoutId = setTimeout(() => abort(), streamTimeout + 1000);
+    const timeoutId = setTimeout(() => abort(), 6_000);
 
     const { pipe, abort } = renderToPipeableStream(<ServerRouter context={routerContext} url={request.url} nonce={nonce} />, {
       nonce,
@@ -62,5 +67,34 @@ export default function handleRequest(
         if (shellRendered) console.error(error);
       },
     });
+  });
+}
+
+function hasDeferredData(context: EntryContext): boolean {
+  const data = context.staticHandlerContext.loaderData ?? {};
+  return Object.values(data).some((value) => value !== null && typeof value === "object" && Object.values(value).some((v) => v instanceof Promise));
+}
+
+function streamed(request: Request, status: number, headers: Headers, context: EntryContext, nonce: string) {
+  return new Promise<Response>((resolve, reject) => {
+    let shellRendered = false;
+    const { pipe, abort } = renderToPipeableStream(<ServerRouter context={context} url={request.url} nonce={nonce} />, {
+      nonce,
+      onShellReady() {
+        shellRendered = true;
+        const body = new PassThrough();
+        headers.set("Content-Type", "text/html; charset=utf-8");
+        resolve(new Response(createReadableStreamFromReadable(body), { headers, status }));
+        pipe(body);
+      },
+      onShellError(error: unknown) {
+        reject(error);
+      },
+      onError(error: unknown) {
+        status = 500;
+        if (shellRendered) console.error(error);
+      },
+    });
+    setTimeout(abort, streamTimeout + 1000);
   });
 }

@@ -34,7 +34,7 @@ test("Exposure on the demo rooftop: worst point, readings, what-if off and reset
   // What-if: SM-3-2100 off. The worker answers; the page says it is not saved.
   await expect(page.getByTestId("what-if-state")).not.toContainText("Preparing", { timeout: 60_000 });
   await page.getByLabel("SM-3-2100 on").uncheck();
-  await expect(page.locator("section[data-what-if=on][data-what-if-pending=false]")).toBeVisible({ timeout: 60_000 });
+  await expect(page.locator("[data-testid=exposure-results][data-what-if=on][data-what-if-pending=false]")).toBeVisible({ timeout: 60_000 });
   await expect(page.getByTestId("what-if-state")).toContainText("What-if, not saved");
   await expect(page.getByTestId("what-if-state")).toContainText("SM-3-2100: switched off");
   const after = (await worst.innerText()).trim();
@@ -45,7 +45,7 @@ test("Exposure on the demo rooftop: worst point, readings, what-if off and reset
 
   // Reset: back to the stored inventory's numbers.
   await page.getByRole("button", { name: "Reset to the stored inventory" }).click();
-  await expect(page.locator("section[data-what-if=off]")).toBeVisible();
+  await expect(page.locator("[data-testid=exposure-results][data-what-if=off]")).toBeVisible();
   await expect(worst).toHaveText(before);
   await expect(page.getByLabel("SM-3-2100 on")).toBeChecked();
 });

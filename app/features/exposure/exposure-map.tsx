@@ -1,13 +1,15 @@
-// One level's exposure map in SVG, on the site plan: filled bands of total % of limit (viridis,
-// log axis), labelled contour lines, the four classes as outlines and hatching that read in
+// One level's exposure map in SVG, on the site plan: the colour field of total % of limit (viridis,
+// log axis, one small image; field-image.ts), labelled contour lines, the four classes as outlines and hatching that read in
 // greyscale, obstructions and access points of the level, emitters with azimuth arrows, readings
 // against predictions, the worst point, and the value under the pointer.
 import { memo, useId, useMemo, useState } from "react";
 import { pointInPolygon, type EmitterInput } from "~/engine";
 import { SitePlan } from "~/features/layout/site-plan";
 import type { PlanFrame, XY } from "~/features/layout/plan-frame";
-import { bandColour, bandThresholds, formatPercent } from "./colour-scale";
+import { formatPercent, SCALE_MIN_PERCENT } from "./colour-scale";
 import { classShapes, contourShapes, extendOutside, labelCandidates, ringLength, type Ring } from "./contours";
+import { fieldImage } from "./field-image";
+import { around, overlapArea, placeLabels, segmentBoxes, textWidth, type Box, type PlacedLabel } from "./map-labels";
 import type { AreaView, EmitterView, ExposureResult } from "./exposure-result";
 import type { ExposureOptions } from "./options";
 import { pointValue, type PointValue } from "./point-value";
@@ -40,11 +42,13 @@ export function ExposureLevelMap({ title, engineEmitters, elevationM, areas, res
   const uid = useId().replace(/[^a-zA-Z0-9_-]/g, "");
   const [hover, setHover] = useState<PointValue | null>(null);
   const geometry = useMemo(() => areas.map((a) => surfaceGeometry(a)), [areas]);
-  // Stable, so the plan's frame (and with it the memoised layers) survives pointer moves.
-  const avoid = useMemo<XY[]>(() => [...result.readings.map((r) => [r.x, r.y] as XY), ...accessPoints.map((a) => [a.x, a.y] as XY), ...obstructions.map((o) => centroid(o.polygon))], [result.readings, accessPoints, obstructions]);
   const planSurfaces = useMemo(() => areas.map((a) => ({ id: a.surfaceId, name: a.name, kind: "area" as const, polygon: a.polygon, elevationM: a.elevationM, access: "public" as const })), [areas]);
-  const levelObstructions = obstructions.filter((o) => onLevel(o.baseM, elevationM));
-  const levelAccess = accessPoints.filter((a) => onLevel(a.z, elevationM));
+  const levelAccess = useMemo(() => accessPoints.filter((a) => onLevel(a.z, elevationM)), [accessPoints, elevationM]);
+  const levelObstructions = useMemo(() => obstructions.filter((o) => onLevel(o.baseM, elevationM)), [obstructions, elevationM]);
+  const levelReadings = useMemo(
+    () => result.readings.filter((r) => onLevel(r.z - r.heightM, elevationM) && areas.some((a) => pointInPolygon(r.x, r.y, a.polygon))),
+    [result.readings, areas, elevationM],
+  );
   const labels = new Map(result.emitters.map((e) => [e.engineId, e.label]));
 
   const onMove = (p: XY | null) => {
@@ -84,25 +88,19 @@ export function ExposureLevelMap({ title, engineEmitters, elevationM, areas, res
             {areas.map((a) => (
               <path key={a.surfaceId} d={pathOf(frame, [a.polygon])} fill="none" className="stroke-ink-900" strokeWidth={1.5} />
             ))}
-            <ContourLabels frame={frame} geometry={geometry} areas={areas} emitters={result.emitters} avoid={avoid} />
             {levelObstructions.map((o) => (
-              <g key={o.id}>
-                <path d={pathOf(frame, [o.polygon])} fill="url(#plan-solid)" className="stroke-graphite-600" strokeWidth={1.25} />
-                <HaloText frame={frame} at={[centroid(o.polygon)[0], Math.max(...o.polygon.map((p) => p[1])) - 14 / frame.scale]} text={`${o.name} · ${o.heightM} m`} small />
-              </g>
+              <path key={o.id} d={pathOf(frame, [o.polygon])} fill="url(#plan-solid)" className="stroke-graphite-600" strokeWidth={1.25} />
             ))}
-            {levelAccess.map((a) => (
-              <AccessMarker key={a.id} frame={frame} point={a} />
-            ))}
-            {emitterLabelPlaces(frame, result.emitters).map(({ emitter, dx, dy, anchor }) => (
-              <EmitterMarker key={emitter.inventoryId} frame={frame} emitter={emitter} dx={dx} dy={dy} anchor={anchor} />
-            ))}
-            {result.readings
-              .filter((r) => onLevel(r.z - r.heightM, elevationM) && areas.some((a) => pointInPolygon(r.x, r.y, a.polygon)))
-              .map((r) => (
-                <ReadingMarker key={r.id} frame={frame} at={[r.x, r.y]} label={r.label} ratio={r.ratio} above={r.abovePrediction} />
-              ))}
-            {worst?.worstAt ? <WorstMarker frame={frame} at={[worst.worstAt.x, worst.worstAt.y]} text={`worst ${formatPercent(worst.worstPercent)}`} /> : null}
+            <MarksAndLabels
+              frame={frame}
+              geometry={geometry}
+              areas={areas}
+              emitters={result.emitters}
+              readings={levelReadings}
+              access={levelAccess}
+              obstructions={levelObstructions}
+              worst={worst}
+            />
             {hover ? <HoverBox frame={frame} value={hover} labels={labels} /> : null}
           </g>
         )}
@@ -118,12 +116,24 @@ export function ExposureLevelMap({ title, engineEmitters, elevationM, areas, res
 
 type Geometry = ReturnType<typeof surfaceGeometry>;
 
-/** The colour bands, class hatching and outlines, and contour lines, clipped to the surfaces; redrawn only when the values change. */
+/** The colour field, class hatching and outlines, and contour lines, clipped to the surfaces; redrawn only when the values change. */
 const FieldLayers = memo(function FieldLayers({ frame, geometry, uid }: { frame: PlanFrame; geometry: Geometry[]; uid: string }) {
   return (
     <g clipPath={`url(#${uid}-clip)`}>
       <rect x={0} y={0} width={frame.width} height={frame.height} className="fill-sheet" />
-      {geometry.map((g, k) => g.bands.map((b) => (b.rings.length ? <path key={`${k}-${b.value}`} d={pathOf(frame, b.rings)} fill={bandColour(b.value)} fillRule="evenodd" /> : null)))}
+      {geometry.map((g, k) => {
+        // The colour field: one pixel per grid node, scaled up smoothly (see field-image.ts), inside the smoothed 1 % contour.
+        if (!g.floor.rings.length) return null;
+        const [x, y] = frame.toPx(g.field.x, g.field.y + g.field.height);
+        return (
+          <g key={`f${k}`}>
+            <clipPath id={`${uid}-floor-${k}`}>
+              <path d={pathOf(frame, g.floor.rings)} clipRule="evenodd" />
+            </clipPath>
+            <image clipPath={`url(#${uid}-floor-${k})`} href={g.field.href} x={x} y={y} width={g.field.width * frame.scale} height={g.field.height * frame.scale} preserveAspectRatio="none" />
+          </g>
+        );
+      })}
       {geometry.map((g, k) => (
         <g key={`c${k}`}>
           {g.classes[1].rings.length ? <path d={pathOf(frame, g.classes[1].rings)} fill={`url(#${uid}-h2)`} fillRule="evenodd" /> : null}
@@ -136,15 +146,84 @@ const FieldLayers = memo(function FieldLayers({ frame, geometry, uid }: { frame:
   );
 });
 
-const ContourLabels = memo(function ContourLabels({ frame, geometry, areas, emitters, avoid }: { frame: PlanFrame; geometry: Geometry[]; areas: AreaView[]; emitters: EmitterView[]; avoid: XY[] }) {
+type LevelReading = ExposureResult["readings"][number];
+type Worst = AreaView | null;
+
+/** Every mark and label of the level, placed together so no label covers a mark or another label; redrawn only when they change. */
+const MarksAndLabels = memo(function MarksAndLabels({ frame, geometry, areas, emitters, readings, access, obstructions, worst }: { frame: PlanFrame; geometry: Geometry[]; areas: AreaView[]; emitters: EmitterView[]; readings: LevelReading[]; access: MapAccessPoint[]; obstructions: MapObstruction[]; worst: Worst }) {
+  const layout = useMemo(() => layoutMarks(frame, geometry, areas, emitters, readings, access, obstructions, worst), [frame, geometry, areas, emitters, readings, access, obstructions, worst]);
   return (
     <>
-      {contourLabels(frame, geometry, areas, emitters, avoid).map((l, i) => (
+      {layout.contours.map((l, i) => (
         <HaloText key={i} frame={frame} at={l.at} text={`${l.percent} %`} bold={l.percent === 100} />
       ))}
+      {obstructions.map((o) => (
+        <LabelText key={o.id} place={layout.labels.get(`o:${o.id}`)!} text={obstructionText(o)} className="pointer-events-none fill-ink-900 text-[10px]" />
+      ))}
+      {access.map((a) => (
+        <AccessMarker key={a.id} frame={frame} point={a} label={layout.labels.get(`a:${a.id}`)!} />
+      ))}
+      {layout.emitters.map((e) => (
+        <EmitterMarker key={e.inventoryId} frame={frame} emitter={e} label={layout.labels.get(`e:${e.inventoryId}`)!} />
+      ))}
+      {readings.map((r) => (
+        <ReadingMarker key={r.id} frame={frame} at={[r.x, r.y]} label={r.label} ratio={r.ratio} above={r.abovePrediction} place={layout.labels.get(`r:${r.id}`)!} />
+      ))}
+      {worst?.worstAt ? <WorstMarker frame={frame} at={[worst.worstAt.x, worst.worstAt.y]} text={worstText(worst)} place={layout.labels.get("worst")!} /> : null}
     </>
   );
 });
+
+const worstText = (w: AreaView) => `worst ${formatPercent(w.worstPercent)}`;
+const readingText = (r: LevelReading) => `${r.label.split(" ")[0]} ×${r.ratio === null ? "–" : r.ratio.toFixed(2)}`;
+const emitterText = (e: EmitterView) => `${e.label}${e.active ? "" : " (off)"}`;
+const obstructionText = (o: MapObstruction) => `${o.name} · ${o.heightM} m`;
+/** An obstruction's label inside its outline: at the top, else the bottom, else rows between (centred, right, left), else just outside (left edge and top of the text, px). */
+function obstructionPlaces(frame: PlanFrame, o: MapObstruction): [number, number][] {
+  const w = textWidth(obstructionText(o), 10);
+  const xs = o.polygon.map((p) => frame.toPx(p[0], p[1]));
+  const [cx] = frame.toPx(...centroid(o.polygon));
+  const top = Math.min(...xs.map((p) => p[1]));
+  const bottom = Math.max(...xs.map((p) => p[1]));
+  const right = Math.max(...xs.map((p) => p[0])) - w - 4;
+  const left = Math.min(...xs.map((p) => p[0])) + 4;
+  const rows: number[] = [top + 5, bottom - 17];
+  for (let y = top + 19; y < bottom - 17; y += 14) rows.push(y);
+  return [...rows.flatMap((y) => [[cx - w / 2, y], [right, y], [left, y]] as [number, number][]), [cx - w / 2, top - 15], [cx - w / 2, bottom + 3]];
+}
+const ARROW_PX = 22;
+const arrowEnd = (frame: PlanFrame, e: EmitterView): [number, number] => {
+  const [px, py] = frame.toPx(e.x, e.y);
+  const a = (e.azimuthDeg * Math.PI) / 180;
+  return [px + Math.sin(a) * ARROW_PX, py - Math.cos(a) * ARROW_PX];
+};
+
+/** The marks' boxes, then the labels placed clear of them (worst point first, then emitters, readings, access points), then the contour labels clear of all. */
+function layoutMarks(frame: PlanFrame, geometry: Geometry[], areas: AreaView[], all: EmitterView[], readings: LevelReading[], access: MapAccessPoint[], obstructions: MapObstruction[], worst: Worst) {
+  const { bounds } = frame;
+  const emitters = all.filter((e) => e.x >= bounds.minX && e.x <= bounds.maxX && e.y >= bounds.minY && e.y <= bounds.maxY);
+  const marks: Box[] = [];
+  for (const e of emitters) {
+    const p = frame.toPx(e.x, e.y);
+    marks.push(around(p, 6), ...segmentBoxes(p, arrowEnd(frame, e)), around(arrowEnd(frame, e), 5));
+  }
+  for (const a of access) marks.push(around(frame.toPx(a.x, a.y), 7));
+  for (const r of readings) marks.push(around(frame.toPx(r.x, r.y), 9));
+  if (worst?.worstAt) marks.push(around(frame.toPx(worst.worstAt.x, worst.worstAt.y), 12));
+  const labels = placeLabels(
+    [
+      ...(worst?.worstAt ? [{ key: "worst", at: frame.toPx(worst.worstAt.x, worst.worstAt.y), text: worstText(worst), size: 11, bold: true, gap: 13 }] : []),
+      ...emitters.map((e) => ({ key: `e:${e.inventoryId}`, at: frame.toPx(e.x, e.y), text: emitterText(e) })),
+      ...readings.map((r) => ({ key: `r:${r.id}`, at: frame.toPx(r.x, r.y), text: readingText(r), bold: r.abovePrediction, gap: 10 })),
+      ...access.map((a) => ({ key: `a:${a.id}`, at: frame.toPx(a.x, a.y), text: a.name, gap: 9 })),
+      ...obstructions.map((o) => ({ key: `o:${o.id}`, at: frame.toPx(...centroid(o.polygon)), text: obstructionText(o), places: obstructionPlaces(frame, o) })),
+    ],
+    marks,
+    frame,
+  );
+  const blocked = [...marks, ...[...labels.values()].map((l) => l.box)];
+  return { emitters, labels, contours: contourLabels(frame, geometry, areas, blocked) };
+}
 
 /** Bands, contour lines and class outlines of one surface, in site metres. */
 function surfaceGeometry(a: AreaView) {
@@ -152,44 +231,16 @@ function surfaceGeometry(a: AreaView) {
   const values = extendOutside(a.percent, inside, a.grid.nx, a.grid.ny);
   const classValues = extendOutside(a.classes.map((c) => (c === 255 ? 0 : c)), inside, a.grid.nx, a.grid.ny);
   return {
-    bands: contourShapes(a.grid, values, bandThresholds()),
+    field: fieldImage(a.grid, values),
+    floor: contourShapes(a.grid, values, [SCALE_MIN_PERCENT])[0],
     lines: contourShapes(a.grid, values, CONTOUR_PERCENTS),
     classes: classShapes(a.grid, Array.from(classValues)),
   };
 }
 
-type Box = [number, number, number, number];
-const overlaps = (a: Box, b: Box) => a[0] < b[2] && b[0] < a[2] && a[1] < b[3] && b[1] < a[3];
-
-/** Emitters inside the plan, each label put where it overlaps no earlier one: right, then left, then below, then above. */
-function emitterLabelPlaces(frame: PlanFrame, emitters: EmitterView[]) {
-  const { bounds } = frame;
-  const boxes: Box[] = [];
-  const out: { emitter: EmitterView; dx: number; dy: number; anchor: "start" | "end" }[] = [];
-  for (const e of emitters) {
-    if (e.x < bounds.minX || e.x > bounds.maxX || e.y < bounds.minY || e.y > bounds.maxY) continue;
-    const [px, py] = frame.toPx(e.x, e.y);
-    const w = 6 * (e.label.length + (e.active ? 0 : 6));
-    const tries: [number, number, "start" | "end"][] = [[8, -6, "start"], [-8, -6, "end"], [8, 14, "start"], [-8, 14, "end"], [8, -18, "start"], [-8, -18, "end"]];
-    let chosen = tries[0];
-    for (const t of tries) {
-      const x0 = t[2] === "start" ? px + t[0] : px + t[0] - w;
-      const box: Box = [x0, py + t[1] - 10, x0 + w, py + t[1] + 2];
-      if (!boxes.some((b) => overlaps(b, box))) {
-        chosen = t;
-        boxes.push(box);
-        break;
-      }
-    }
-    out.push({ emitter: e, dx: chosen[0], dy: chosen[1], anchor: chosen[2] });
-  }
-  return out;
-}
-
-/** One label per contour ring long enough to carry one: at a place well inside the surface and at least 40 px from emitters and other labels. */
-function contourLabels(frame: PlanFrame, geometry: ReturnType<typeof surfaceGeometry>[], areas: AreaView[], emitters: EmitterView[], avoid: XY[]) {
-  // Clear of emitters, readings, access points and their labels (which run to the right of them).
-  const taken: XY[] = [...emitters.map((e) => frame.toPx(e.x, e.y)), ...avoid.flatMap(([x, y]) => [frame.toPx(x, y), frame.toPx(x + 40 / frame.scale, y)])];
+/** One label per contour ring long enough to carry one: at a place well inside the surface, clear of every mark and label and of the other contour labels. */
+function contourLabels(frame: PlanFrame, geometry: Geometry[], areas: AreaView[], blocked: Box[]) {
+  const taken: Box[] = [...blocked];
   const out: { at: XY; percent: number }[] = [];
   const margin = 12 / frame.scale;
   const inside = (x: number, y: number) => areas.some((a) => [[-margin, -margin], [margin, -margin], [margin, margin], [-margin, margin]].every(([dx, dy]) => pointInPolygon(x + dx, y + dy, a.polygon)));
@@ -198,10 +249,12 @@ function contourLabels(frame: PlanFrame, geometry: ReturnType<typeof surfaceGeom
       for (const ring of line.rings) {
         const length = ringLength(ring);
         if (length * frame.scale < 80) continue;
+        const w = textWidth(`${line.value} %`, 11, line.value === 100) + 8;
         for (const p of labelCandidates(ring, Math.max(length / 12, 1))) {
-          const px = frame.toPx(p[0], p[1]);
-          if (!inside(p[0], p[1]) || taken.some((t) => Math.hypot(t[0] - px[0], t[1] - px[1]) < 40)) continue;
-          taken.push(px);
+          const [x, y] = frame.toPx(p[0], p[1]);
+          const box: Box = [x - w / 2, y - 8, x + w / 2, y + 8];
+          if (!inside(p[0], p[1]) || taken.some((t) => overlapArea(t, box) > 0)) continue;
+          taken.push(box);
           out.push({ at: p, percent: line.value });
           break;
         }
@@ -241,27 +294,46 @@ function HaloText({ frame, at, text, bold = false, small = false }: { frame: Pla
   );
 }
 
-function AccessMarker({ frame, point }: { frame: PlanFrame; point: MapAccessPoint }) {
+/** A line from a mark to its label when the label had to move away from it. */
+function Leader({ place }: { place: PlacedLabel }) {
+  if (!place.leader) return null;
+  const [x0, y0, x1, y1] = place.box;
+  const tx = Math.max(x0, Math.min(x1, place.anchorX));
+  const ty = Math.max(y0, Math.min(y1, place.anchorY));
+  return <line x1={place.anchorX} y1={place.anchorY} x2={tx} y2={ty} className="stroke-graphite-600" strokeWidth={0.75} />;
+}
+
+function LabelText({ place, text, className }: { place: PlacedLabel; text: string; className: string }) {
+  return (
+    <>
+      <Leader place={place} />
+      <text x={place.x} y={place.y} className={className} stroke="#ffffff" strokeWidth={3} paintOrder="stroke">
+        {text}
+      </text>
+    </>
+  );
+}
+
+function AccessMarker({ frame, point, label }: { frame: PlanFrame; point: MapAccessPoint; label: PlacedLabel }) {
   const [px, py] = frame.toPx(point.x, point.y);
   return (
-    <g transform={`translate(${px} ${py})`}>
-      <rect x={-6} y={-6} width={12} height={12} className="fill-sheet stroke-ink-900" strokeWidth={1.5} />
-      <text y={4} textAnchor="middle" className="fill-ink-900 text-[9px] font-semibold">
-        {point.kind.slice(0, 1).toUpperCase()}
-      </text>
-      <text x={9} y={4} className="fill-ink-900 text-[10px]" stroke="#ffffff" strokeWidth={3} paintOrder="stroke">
-        {point.name}
-      </text>
+    <g>
+      <g transform={`translate(${px} ${py})`}>
+        <rect x={-6} y={-6} width={12} height={12} className="fill-sheet stroke-ink-900" strokeWidth={1.5} />
+        <text y={4} textAnchor="middle" className="fill-ink-900 text-[9px] font-semibold">
+          {point.kind.slice(0, 1).toUpperCase()}
+        </text>
+      </g>
+      <LabelText place={label} text={point.name} className="fill-ink-900 text-[10px]" />
     </g>
   );
 }
 
 /** An emitter: a black diamond and an arrow along its azimuth (clockwise from north); hollow when off. */
-function EmitterMarker({ frame, emitter, dx: lx, dy: ly, anchor }: { frame: PlanFrame; emitter: EmitterView; dx: number; dy: number; anchor: "start" | "end" }) {
+function EmitterMarker({ frame, emitter, label }: { frame: PlanFrame; emitter: EmitterView; label: PlacedLabel }) {
   const [px, py] = frame.toPx(emitter.x, emitter.y);
-  const a = (emitter.azimuthDeg * Math.PI) / 180;
-  const length = 22;
-  const [dx, dy] = [Math.sin(a) * length, -Math.cos(a) * length];
+  const [ex, ey] = arrowEnd(frame, emitter);
+  const [dx, dy] = [ex - px, ey - py];
   const off = !emitter.active;
   return (
     <g className={off ? "opacity-60" : undefined} data-emitter={emitter.label}>
@@ -269,43 +341,40 @@ function EmitterMarker({ frame, emitter, dx: lx, dy: ly, anchor }: { frame: Plan
       <line x1={px} y1={py} x2={px + dx} y2={py + dy} className="stroke-ink-900" strokeWidth={1.6} strokeDasharray={off ? "3 2" : undefined} />
       <path d="M0 -6L4 2L-4 2Z" transform={`translate(${px + dx} ${py + dy}) rotate(${emitter.azimuthDeg})`} className="fill-ink-900" stroke="#ffffff" strokeWidth={0.8} />
       <path d="M0 -5L5 0L0 5L-5 0Z" transform={`translate(${px} ${py})`} className={off ? "fill-sheet stroke-ink-900" : "fill-ink-900"} stroke="#ffffff" strokeWidth={off ? 1.5 : 1} />
-      <text x={px + lx} y={py + ly} textAnchor={anchor} className="fill-ink-900 text-[10px] font-medium" stroke="#ffffff" strokeWidth={3} paintOrder="stroke">
-        {emitter.label}
-        {off ? " (off)" : ""}
-      </text>
+      <LabelText place={label} text={emitterText(emitter)} className="fill-ink-900 text-[10px] font-medium" />
     </g>
   );
 }
 
 /** A reading: a circle with its ratio to the prediction; above its prediction, a heavy triangle that reads without colour. */
-function ReadingMarker({ frame, at, label, ratio, above }: { frame: PlanFrame; at: XY; label: string; ratio: number | null; above: boolean }) {
+function ReadingMarker({ frame, at, label, ratio, above, place }: { frame: PlanFrame; at: XY; label: string; ratio: number | null; above: boolean; place: PlacedLabel }) {
   const [px, py] = frame.toPx(at[0], at[1]);
   const text = `${label.split(" ")[0]} ×${ratio === null ? "–" : ratio.toFixed(2)}`;
   return (
-    <g transform={`translate(${px} ${py})`} data-reading={label} data-above={above ? "true" : "false"}>
-      {above ? <path d="M0 -9L8 6H-8Z" className="fill-ink-900" stroke="#ffffff" strokeWidth={1.5} /> : <circle r={5} className="fill-sheet stroke-ink-900" strokeWidth={1.5} />}
-      {above ? (
-        <text y={4} textAnchor="middle" className="fill-sheet text-[9px] font-bold">
-          !
-        </text>
-      ) : null}
-      <text x={10} y={4} className={`fill-ink-900 text-[10px] ${above ? "font-bold" : ""}`} stroke="#ffffff" strokeWidth={3} paintOrder="stroke">
-        {text}
-      </text>
+    <g data-reading={label} data-above={above ? "true" : "false"}>
+      <g transform={`translate(${px} ${py})`}>
+        {above ? <path d="M0 -9L8 6H-8Z" className="fill-ink-900" stroke="#ffffff" strokeWidth={1.5} /> : <circle r={5} className="fill-sheet stroke-ink-900" strokeWidth={1.5} />}
+        {above ? (
+          <text y={4} textAnchor="middle" className="fill-sheet text-[9px] font-bold">
+            !
+          </text>
+        ) : null}
+      </g>
+      <LabelText place={place} text={text} className={`fill-ink-900 text-[10px] ${above ? "font-bold" : ""}`} />
     </g>
   );
 }
 
-function WorstMarker({ frame, at, text }: { frame: PlanFrame; at: XY; text: string }) {
+function WorstMarker({ frame, at, text, place }: { frame: PlanFrame; at: XY; text: string; place: PlacedLabel }) {
   const [px, py] = frame.toPx(at[0], at[1]);
   return (
-    <g transform={`translate(${px} ${py})`} data-testid="worst-marker">
-      <circle r={7} fill="none" stroke="#ffffff" strokeWidth={4} />
-      <circle r={7} fill="none" className="stroke-ink-900" strokeWidth={2} />
-      <path d="M-11 0H-4M4 0H11M0 -11V-4M0 4V11" className="stroke-ink-900" strokeWidth={1.5} />
-      <text x={12} y={-9} className="fill-ink-900 text-[11px] font-bold" stroke="#ffffff" strokeWidth={3} paintOrder="stroke">
-        {text}
-      </text>
+    <g data-testid="worst-marker">
+      <g transform={`translate(${px} ${py})`}>
+        <circle r={7} fill="none" stroke="#ffffff" strokeWidth={4} />
+        <circle r={7} fill="none" className="stroke-ink-900" strokeWidth={2} />
+        <path d="M-11 0H-4M4 0H11M0 -11V-4M0 4V11" className="stroke-ink-900" strokeWidth={1.5} />
+      </g>
+      <LabelText place={place} text={text} className="fill-ink-900 text-[11px] font-bold" />
     </g>
   );
 }

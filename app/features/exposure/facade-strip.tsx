@@ -1,8 +1,9 @@
 // A facade as an elevation strip: distance along the facade (from its first end) across, height
 // up, on the map's colour scale, with the 100 % line, the class outlines and the worst point.
-import { bandColour, bandThresholds, formatPercent } from "./colour-scale";
+import { formatPercent, SCALE_MIN_PERCENT } from "./colour-scale";
 import { classShapes, contourShapes, type Ring } from "./contours";
 import type { FacadeView } from "./exposure-result";
+import { fieldImage } from "./field-image";
 
 const PAD = { left: 44, right: 12, top: 24, bottom: 30 };
 
@@ -21,7 +22,9 @@ export function FacadeStrip({ facade, width = 960 }: { facade: FacadeView; width
   const toPx = (s: number, z: number): [number, number] => [shift + PAD.left + s * scale, PAD.top + (top - z) * scale];
   const g = { nx: along.length, ny: heights.length, x0: 0, y0: bottom, step };
   const pathOf = (rings: Ring[]) => rings.map((r) => r.map((p, i) => `${i ? "L" : "M"}${toPx(p[0], p[1]).map((v) => v.toFixed(1)).join(" ")}`).join("") + "Z").join("");
-  const bands = contourShapes(g, facade.percent, bandThresholds());
+  const field = fieldImage(g, facade.percent);
+  const [fx, fy] = toPx(field.x, field.y + field.height);
+  const [floor] = contourShapes(g, facade.percent, [SCALE_MIN_PERCENT]);
   const [hundred] = contourShapes(g, facade.percent, [100]);
   const classes = classShapes(g, facade.classes);
   const ticks = (lo: number, hi: number) => {
@@ -41,7 +44,10 @@ export function FacadeStrip({ facade, width = 960 }: { facade: FacadeView; width
         </clipPath>
       </defs>
       <g clipPath={`url(#${clipId})`}>
-        {bands.map((b) => (b.rings.length ? <path key={b.value} d={pathOf(b.rings)} fill={bandColour(b.value)} fillRule="evenodd" /> : null))}
+        <clipPath id={`${clipId}-floor`}>
+          <path d={pathOf(floor.rings)} clipRule="evenodd" />
+        </clipPath>
+        {floor.rings.length ? <image clipPath={`url(#${clipId}-floor)`} href={field.href} x={fx} y={fy} width={field.width * scale} height={field.height * scale} preserveAspectRatio="none" /> : null}
         {classes.map((c) => (c.rings.length ? <path key={c.value} d={pathOf(c.rings)} fill="none" className="stroke-ink-900" strokeWidth={c.value === 1 ? 1.4 : 2.2} strokeDasharray={c.value === 1 ? "6 3" : undefined} /> : null))}
         {hundred.rings.length ? <path d={pathOf(hundred.rings)} fill="none" className="stroke-ink-900" strokeWidth={1.6} /> : null}
       </g>

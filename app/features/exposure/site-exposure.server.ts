@@ -1,48 +1,48 @@
 // The Exposure page's data: the site in scope, the options from the URL (bad values fall back to
 // the defaults with a message), the inventory and the readings of the site's visits, and the
-// computation of the stored inventory, run in-process by the pure engine.
-import { EngineInputError } from "~/engine";
+// computation of the stored inventory by the pure engine, in-process, kept per input
+// (result-cache.server.ts). The route defers the computation when it is not at hand, so the page
+// paints before the engine has run; loadExposurePage waits for it.
 import { findSite } from "~/features/sites/sites.server";
 import type { Scope } from "~/features/sites/scope.server";
 import { listReadings } from "~/features/visits/readings.server";
 import { listVisits } from "~/features/visits/visits.server";
-import { computeExposure, type ExposureInput, type ExposureResult } from "./exposure-result";
+import type { ExposureInput } from "./exposure-result";
 import { loadSiteInventory } from "./inventory.server";
 import { optionsFromSearch } from "./options";
 import type { SiteReading } from "./readings";
+import { exposureOutcome } from "./result-cache.server";
 
 export type ExposurePage = NonNullable<Awaited<ReturnType<typeof loadExposurePage>>>;
+export type ExposureShell = NonNullable<Awaited<ReturnType<typeof loadExposureShell>>>;
 
-/** Null when the site is not in the scope (the route answers 404). Never throws for the engine's refusals: they come back as `problem`. */
-export async function loadExposurePage(scope: Scope, siteId: string, search: URLSearchParams) {
+/** Null when the site is not in the scope (the route answers 404). `exposure` is the outcome, or a promise of it when it must be read or computed. */
+export async function loadExposureShell(scope: Scope, siteId: string, search: URLSearchParams) {
   const site = await findSite(scope, siteId);
   if (!site) return null;
   const { options, errors } = optionsFromSearch(search);
   const [inventory, readings] = await Promise.all([loadSiteInventory(scope.organizationId, site.id), siteReadings(site.id)]);
   const input: ExposureInput = { options, surfaces: inventory.surfaces, emitters: inventory.emitters, patterns: [...inventory.patterns], readings };
-  const started = performance.now();
-  let result: ExposureResult | null = null;
-  let problem: string | null = null;
-  try {
-    result = computeExposure(input);
-  } catch (error) {
-    if (!(error instanceof EngineInputError)) throw error;
-    problem = `These options cannot be computed for this site: ${error.message}`;
-  }
-  const computeMs = performance.now() - started;
   return {
     site: { id: site.id, name: site.name },
     options,
     errors,
     input,
-    result,
-    problem,
-    computeMs: Math.round(computeMs),
+    exposure: exposureOutcome(scope.organizationId, site.id, input),
     generatedAt: new Date().toISOString(),
     obstructions: inventory.obstructions.map((o) => ({ id: o.id, name: o.name, polygon: o.polygon, heightM: o.heightM, baseM: o.baseM })),
     accessPoints: inventory.accessPoints.map((a) => ({ id: a.id, name: a.name, kind: a.kind, x: a.x, y: a.y, z: a.z })),
     emitterInfo: Object.fromEntries(inventory.emitterRows.map((e) => [e.id, { operator: e.operator, band: e.band }])),
   };
+}
+
+/** The page's data with the computation done. Never throws for the engine's refusals: they come back as `problem`. */
+export async function loadExposurePage(scope: Scope, siteId: string, search: URLSearchParams) {
+  const shell = await loadExposureShell(scope, siteId, search);
+  if (!shell) return null;
+  const { exposure, ...rest } = shell;
+  const { result, problem, computeMs, source } = await exposure;
+  return { ...rest, result, problem, computeMs, source };
 }
 
 /** Every reading of the site's visits, oldest visit first. */

@@ -1,5 +1,5 @@
-import { useMemo } from "react";
-import { Link, NavLink } from "react-router";
+import { Suspense, useMemo } from "react";
+import { Await, Link, NavLink } from "react-router";
 import { Button } from "~/components/button";
 import { RfCautions } from "~/components/cautions";
 import { Card, EmptyState, Notice } from "~/components/panels";
@@ -25,7 +25,11 @@ import { FacadeStrip } from "~/features/exposure/facade-strip";
 import { MapLegend } from "~/features/exposure/map-legend";
 import { OptionsForm } from "~/features/exposure/options-form";
 import { optionsToSearch, tierLabels } from "~/features/exposure/options";
-import { loadExposurePage } from "~/features/exposure/site-exposure.server";
+import type { ExposureOutcome } from "~/features/exposure/result-cache.server";
+import {
+  loadExposureShell,
+  type ExposureShell,
+} from "~/features/exposure/site-exposure.server";
 import { useWhatIf } from "~/features/exposure/use-what-if";
 import { describeEdit } from "~/features/exposure/what-if";
 import { scopeOf } from "~/features/sites/scope.server";
@@ -48,45 +52,21 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   );
   const search = foldEvaluation(new URL(request.url).searchParams);
   return found(
-    await loadExposurePage(scopeOf(member), params.siteId, search),
+    await loadExposureShell(scopeOf(member), params.siteId, search),
     "No such site in your organisation.",
   );
 }
 
 export default function ExposureSection({ loaderData }: Route.ComponentProps) {
-  const {
-    site,
-    options,
-    errors,
-    input,
-    problem,
-    generatedAt,
-    obstructions,
-    accessPoints,
-    emitterInfo,
-    computeMs,
-  } = loaderData;
-  const whatIf = useWhatIf(input, loaderData.result);
-  const result = whatIf.result;
-  const engineList = useMemo(
-    () => engineEmittersOf(input, result?.edits ?? {}),
-    [input, result],
-  );
+  const { site, options, errors, exposure } = loaderData;
   const query = optionsToSearch(options).toString();
   const suffix = query ? `?${query}` : "";
   const base = `/sites/${site.id}`;
-  const tier = tierLabels[options.standard][options.tier];
   const errorList = Object.values(errors);
-  const labels = new Map(input.emitters.map((e) => [e.id, e.label]));
 
   return (
     <>
-      <section
-        aria-labelledby="exposure-title"
-        className="space-y-6"
-        data-what-if={whatIf.active ? "on" : "off"}
-        data-what-if-pending={whatIf.pending ? "true" : "false"}
-      >
+      <section aria-labelledby="exposure-title" className="space-y-6">
         <div className="flex flex-wrap items-center justify-between gap-3">
           <h2 id="exposure-title" className="text-lg font-semibold">
             Exposure
@@ -127,6 +107,67 @@ export default function ExposureSection({ loaderData }: Route.ComponentProps) {
           ) : null}
         </Card>
 
+        <Suspense fallback={<Computing />}>
+          <Await resolve={exposure}>
+            {(outcome: ExposureOutcome) => (
+              <ExposureResults shell={loaderData} outcome={outcome} />
+            )}
+          </Await>
+        </Suspense>
+      </section>
+      <div className="mt-6">
+        <RfCautions />
+      </div>
+    </>
+  );
+}
+
+function Computing() {
+  return (
+    <p
+      className="rounded-sheet border border-rule bg-sheet p-5 text-sm text-graphite-600"
+      role="status"
+      data-testid="exposure-computing"
+    >
+      Computing the exposure of every surface of this site… The map follows in
+      a few seconds; the result is kept, so the next opening is quick.
+    </p>
+  );
+}
+
+function ExposureResults({
+  shell,
+  outcome,
+}: {
+  shell: Omit<ExposureShell, "exposure">;
+  outcome: ExposureOutcome;
+}) {
+  const {
+    site,
+    options,
+    input,
+    generatedAt,
+    obstructions,
+    accessPoints,
+    emitterInfo,
+  } = shell;
+  const { problem, computeMs, source } = outcome;
+  const whatIf = useWhatIf(input, outcome.result);
+  const result = whatIf.result;
+  const engineList = useMemo(
+    () => engineEmittersOf(input, result?.edits ?? {}),
+    [input, result],
+  );
+  const base = `/sites/${site.id}`;
+  const tier = tierLabels[options.standard][options.tier];
+  const labels = new Map(input.emitters.map((e) => [e.id, e.label]));
+  return (
+    <div
+      className="space-y-6"
+      data-testid="exposure-results"
+      data-what-if={whatIf.active ? "on" : "off"}
+      data-what-if-pending={whatIf.pending ? "true" : "false"}
+    >
         {problem ? (
           <Notice state="danger" role="alert">
             {problem}
@@ -146,6 +187,7 @@ export default function ExposureSection({ loaderData }: Route.ComponentProps) {
               )}
               onReset={whatIf.reset}
               serverMs={computeMs}
+              source={source}
             />
 
             <Summary result={result} tier={tier} />
@@ -262,11 +304,7 @@ export default function ExposureSection({ loaderData }: Route.ComponentProps) {
             ) : null}
           </>
         ) : null}
-      </section>
-      <div className="mt-6">
-        <RfCautions />
-      </div>
-    </>
+    </div>
   );
 }
 
@@ -323,6 +361,7 @@ function WhatIfBar({
   edits,
   onReset,
   serverMs,
+  source,
 }: {
   active: boolean;
   pending: boolean;
@@ -332,12 +371,14 @@ function WhatIfBar({
   edits: string[];
   onReset: () => void;
   serverMs: number;
+  source: ExposureOutcome["source"];
 }) {
   if (!active)
     return (
       <p className="text-sm text-graphite-600" data-testid="what-if-state">
         Showing the stored inventory (computed on the server in{" "}
-        <span className="figures">{serverMs} ms</span>). Edits under “Emitters
+        <span className="figures">{serverMs} ms</span>
+        {source === "computed" ? "" : ", kept from an earlier opening"}). Edits under “Emitters
         and what-if” recompute here, not saved.
         {state === "starting" ? " Preparing the what-if calculator…" : ""}
       </p>

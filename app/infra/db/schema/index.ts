@@ -12,3 +12,4 @@ export * from "./assessments";
 export * from "./documents";
 export * from "./filings";
 export * from "./billing";
+export * from "./exposure-cache";
