@@ -168,6 +168,20 @@ describe("POST /api/stripe/webhook", () => {
     expect(c).toMatchObject({ state: "failed", failureMessage: "Your card was declined.", documentId: null });
     expect(await db.select().from(schema.payment).where(eq(schema.payment.checkoutId, checkout.id))).toHaveLength(0);
   });
+
+  it("finds a declined card's checkout from our own metadata alone, as Stripe sends it (no session id on the intent)", async () => {
+    const { checkout, pi } = await newCheckout("invoice", 2500);
+    const payload = event("payment_intent.payment_failed", { id: pi, object: "payment_intent", status: "requires_payment_method", metadata: { checkoutId: checkout.id, organizationId: org.id }, last_payment_error: { message: "Insufficient funds." } });
+    expect((await post(payload)).status).toBe(200);
+    const [c] = await db.select().from(schema.checkout).where(eq(schema.checkout.id, checkout.id));
+    expect(c).toMatchObject({ state: "failed", failureMessage: "Insufficient funds." });
+    // Another organisation's checkout id in the metadata finds nothing.
+    const other = await newCheckout("invoice", 2500);
+    const foreign = event("payment_intent.payment_failed", { id: other.pi, object: "payment_intent", status: "requires_payment_method", metadata: { checkoutId: other.checkout.id, organizationId: "another-organisation" } });
+    expect((await post(foreign)).status).toBe(200);
+    const [untouched] = await db.select().from(schema.checkout).where(eq(schema.checkout.id, other.checkout.id));
+    expect(untouched.state).toBe("open");
+  });
 });
 
 describe("invoice numbers", () => {

@@ -81,9 +81,20 @@ export async function sessionExpired(tx: Tx, session: Stripe.Checkout.Session): 
   return { outcome: "applied" };
 }
 
+/** A failed payment's checkout: Stripe puts only payment_intent_data.metadata (our checkoutId) on the
+ * PaymentIntent; the local fake also names the session (checkout_session_id). */
+async function checkoutOfIntent(tx: Tx, meta: Stripe.Metadata) {
+  if (meta.checkout_session_id) {
+    const bySession = await lockCheckout(tx, { id: meta.checkout_session_id, metadata: meta });
+    if (bySession) return bySession;
+  }
+  if (!meta.checkoutId || !meta.organizationId) return null;
+  const [byMeta] = await tx.select().from(checkout).where(and(eq(checkout.id, meta.checkoutId), eq(checkout.organizationId, meta.organizationId))).for("update");
+  return byMeta ?? null;
+}
+
 export async function paymentFailed(tx: Tx, intent: Stripe.PaymentIntent): Promise<Applied> {
-  const sessionId = intent.metadata?.checkout_session_id;
-  const c = sessionId ? await lockCheckout(tx, { id: sessionId, metadata: intent.metadata }) : null;
+  const c = await checkoutOfIntent(tx, intent.metadata ?? {});
   if (!c) return { outcome: "ignored", note: "no checkout of ours has this payment intent" };
   if (c.state === "paid") return { outcome: "ignored", note: "the checkout was paid" };
   const message = intent.last_payment_error?.message ?? "The card was declined.";
