@@ -3,6 +3,7 @@
 // webhook → download); a declined card issues nothing; the billing member issues an invoice, the
 // client pays it through the e-mailed link, billing refunds half and the invoice shows partly
 // refunded. Screens are kept as screenshots (checkout, success, invoice) and the invoice PDF too.
+import { spawnSync } from "node:child_process";
 import { writeFileSync } from "node:fs";
 import AxeBuilder from "@axe-core/playwright";
 import { expect, test, type Page } from "@playwright/test";
@@ -106,6 +107,11 @@ test("billing issues an invoice, the client pays through the link, billing refun
   const pdf = await billing.request.get(billing.url() + "/pdf");
   expect(pdf.status()).toBe(200);
   writeFileSync(info.outputPath("invoice.pdf"), await pdf.body());
+  const text = spawnSync("pdftotext", ["-layout", info.outputPath("invoice.pdf"), "-"], { encoding: "utf8" }).stdout;
+  expect(text).toContain(`Invoice ${number}`);
+  expect(text).toMatch(/State: Partly refunded/i);
+  expect(text).toContain("No tax has been computed on this invoice");
+  expect(text).not.toContain("verification code"); // an invoice is not a verifiable document
 
   await visit(billing, "/billing/payments");
   await expect(billing.getByRole("row").filter({ hasText: number })).toContainText("partly refunded");

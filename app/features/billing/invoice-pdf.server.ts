@@ -15,7 +15,7 @@ type Invoice = Awaited<ReturnType<typeof requireInvoice>>;
 export async function renderInvoicePdf(inv: Invoice): Promise<Buffer> {
   const [org] = await db.select({ name: schema.organization.name }).from(schema.organization).where(eq(schema.organization.id, inv.organizationId));
   const number = invoiceNumberText(inv.number);
-  const { doc, finish } = createPdf({ title: `Invoice ${number}`, subtitle: inv.client.name, version: 1, code: number, draft: inv.state === "draft", producedAt: inv.issuedAt ?? inv.createdAt });
+  const { doc, finish } = createPdf({ title: `Invoice ${number}`, subtitle: inv.client.name, version: 1, code: number, footer: `Invoice ${number} · ${inv.client.name}`, draft: inv.state === "draft", producedAt: inv.issuedAt ?? inv.createdAt });
   const money = (n: number) => formatMoney(n, inv.currency);
   say(doc, `Invoice ${number}`, { x: PAGE.margin, y: PAGE.top + 6, weight: "bold", size: 22 });
   doc.moveDown(0.3);

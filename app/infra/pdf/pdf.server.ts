@@ -6,7 +6,16 @@ import PDFDocument from "pdfkit";
 import { fontName, fontRuns, primaryFont, registerFonts, type Weight } from "./fonts.server";
 import { pdfColours as C } from "./palette";
 
-export type PdfMeta = { title: string; subtitle: string; version: number; code: string; draft: boolean; producedAt: Date };
+export type PdfMeta = {
+  title: string;
+  subtitle: string;
+  version: number;
+  code: string;
+  draft: boolean;
+  producedAt: Date;
+  /** The foot's left line in place of "Version n · verification code …" (an invoice has neither). */
+  footer?: string;
+};
 export type Doc = PDFKit.PDFDocument;
 export const PAGE = { width: 595.28, height: 841.89, margin: 50, top: 70, bottom: 62 };
 export const contentWidth = PAGE.width - 2 * PAGE.margin;
@@ -119,7 +128,7 @@ function furniture(doc: Doc, meta: PdfMeta) {
     doc.moveTo(PAGE.margin, 50).lineTo(PAGE.width - PAGE.margin, 50).lineWidth(0.5).strokeColor(C.rule).stroke();
     const footY = PAGE.height - 40;
     doc.moveTo(PAGE.margin, footY - 8).lineTo(PAGE.width - PAGE.margin, footY - 8).lineWidth(0.5).strokeColor(C.rule).stroke();
-    say(doc, `Version ${meta.version} · verification code ${meta.code}${meta.draft ? " · DRAFT, not issued" : ""}`, { x: PAGE.margin, y: footY, size: 8, color: C.graphite, lineBreak: false });
+    say(doc, `${meta.footer ?? `Version ${meta.version} · verification code ${meta.code}`}${meta.draft ? " · DRAFT, not issued" : ""}`, { x: PAGE.margin, y: footY, size: 8, color: C.graphite, lineBreak: false });
     say(doc, `Page ${i - range.start + 1} of ${range.count}`, { x: PAGE.margin, y: footY, size: 8, color: C.graphite, width: contentWidth, align: "right", lineBreak: false });
     if (meta.draft) {
       doc.save().rotate(-35, { origin: [PAGE.width / 2, PAGE.height / 2] });

@@ -2,6 +2,7 @@
 // limit, contour lines with their values, the outline, obstructions, emitters with their azimuth,
 // the worst point), an elevation cut along an emitter's boresight, and the colour scale legend.
 import { contours } from "d3-contour";
+import { around, placeLabels, segmentBoxes, type Box as LabelBox, type LabelRequest } from "~/features/exposure/map-labels";
 import { pdfColours as C } from "~/infra/pdf/palette";
 import { say, type Doc } from "~/infra/pdf/pdf.server";
 import { colourOf, MAP_CONTOURS, scalePosition, SCALE_TICKS } from "./colour-scale";
@@ -77,6 +78,8 @@ export function drawLevelMap(doc: Doc, map: LevelMap, box: Box, opts: { levels?:
   for (const o of map.obstructions) outline(o, 0.6, C.ink, C.paperDeep);
   outline(map.polygon, 1.2, C.ink);
   const masked = grid.percent.map((v, k) => (!grid.mask || grid.mask[k] === 1 ? v : 0));
+  // Contour labels are placed with the emitters' below, clear of the marks.
+  const labels: [string, number, number][] = [];
   for (const level of levels) {
     for (const ring of rings(masked, grid.nx, grid.ny, level)) {
       const pts = ring.map(([i, j]) => P(grid.x0 + i * grid.step, grid.y0 + j * grid.step));
@@ -86,29 +89,53 @@ export function drawLevelMap(doc: Doc, map: LevelMap, box: Box, opts: { levels?:
       doc.lineWidth(level === 100 ? 1.4 : 0.7).strokeColor(level === 100 ? "#ffffff" : C.ink);
       if (level !== 100) doc.dash(2, { space: 1.5 });
       doc.stroke().undash();
+      // Label a ring only when it is big enough to read, and each value at most twice per map.
+      const span = Math.max(Math.max(...pts.map((p) => p[0])) - Math.min(...pts.map((p) => p[0])), Math.max(...pts.map((p) => p[1])) - Math.min(...pts.map((p) => p[1])));
+      if (span < 24 || labels.filter(([text]) => text === `${level} %`).length >= 2) continue;
       const top = pts.reduce((a, b) => (b[1] < a[1] ? b : a));
-      contourLabel(doc, `${level} %`, top[0], top[1]);
+      labels.push([`${level} %`, top[0], top[1]]);
     }
   }
+  // Marks first, then every label placed clear of them and of each other (the web map's placer, in
+  // the figure's own points): contour values first, then the emitters' names.
+  const marks: LabelBox[] = [];
+  const requests: LabelRequest[] = labels.map(([text, x, y], k) => ({ key: `c${k}`, at: [x - box.x, y - box.y], text, size: 6.5, gap: 0, places: [[x - box.x - (text.length * 3.9) / 2, y - box.y - 4.5], [x - box.x - (text.length * 3.9) / 2, y - box.y + 3], [x - box.x + 4, y - box.y - 4.5], [x - box.x - text.length * 3.9 - 4, y - box.y - 4.5]] }));
   for (const e of map.emitters) {
     const [x, y] = P(e.x, e.y);
     const a = ((90 - e.azimuthDeg) * Math.PI) / 180;
-    doc.moveTo(x, y).lineTo(x + 14 * Math.cos(a), y - 14 * Math.sin(a)).lineWidth(1).strokeColor(C.ink).stroke();
-    doc.circle(x + 14 * Math.cos(a), y - 14 * Math.sin(a), 1.4).fillColor(C.ink).fill();
+    const tip: XY = [x + 14 * Math.cos(a), y - 14 * Math.sin(a)];
+    doc.moveTo(x, y).lineTo(...tip).lineWidth(1).strokeColor(C.ink).stroke();
+    doc.circle(...tip, 1.4).fillColor(C.ink).fill();
     doc.rect(x - 3, y - 3, 6, 6).fillAndStroke("#ffffff", C.ink);
-    say(doc, e.label, { x: x + 4, y: y + 2, size: 6.5, lineBreak: false });
+    marks.push(around([x - box.x, y - box.y], 3.5), ...segmentBoxes([x - box.x, y - box.y], [tip[0] - box.x, tip[1] - box.y], 1.5));
+    requests.push({ key: `e${requests.length}`, at: [x - box.x, y - box.y], text: e.label, size: 6.5, gap: 5 });
   }
   for (const sign of map.signs) {
     const [x, y] = P(sign.x, sign.y);
     doc.polygon([x, y - 4], [x + 4, y + 3], [x - 4, y + 3]).lineWidth(0.8).fillAndStroke("#ffffff", C.ink);
+    marks.push(around([x - box.x, y - box.y], 4));
   }
   if (map.worst) {
     const [x, y] = P(map.worst.x, map.worst.y);
     doc.moveTo(x - 5, y - 5).lineTo(x + 5, y + 5).moveTo(x - 5, y + 5).lineTo(x + 5, y - 5).lineWidth(1.6).strokeColor("#ffffff").stroke();
     doc.moveTo(x - 4, y - 4).lineTo(x + 4, y + 4).moveTo(x - 4, y + 4).lineTo(x + 4, y - 4).lineWidth(0.8).strokeColor(C.ink).stroke();
+    marks.push(around([x - box.x, y - box.y], 5));
   }
-  // North arrow and scale bar.
+  const placed = placeLabels(requests, marks, { width: box.w, height: box.h - 18 });
+  for (const r of requests) {
+    const l = placed.get(r.key)!;
+    const [x0, y0, x1, y1] = l.box;
+    if (l.leader) {
+      const cx = Math.max(x0, Math.min(r.at[0], x1));
+      const cy = Math.max(y0, Math.min(r.at[1], y1));
+      doc.moveTo(box.x + r.at[0], box.y + r.at[1]).lineTo(box.x + cx, box.y + cy).lineWidth(0.4).strokeColor(C.ink).stroke();
+    }
+    doc.rect(box.x + x0, box.y + y0 + 0.5, x1 - x0, y1 - y0 - 1).fillColor("#ffffff").fillOpacity(0.85).fill().fillOpacity(1);
+    say(doc, r.text, { x: box.x + x0 + 2, y: box.y + y0 + 1.6, size: 6.5, lineBreak: false });
+  }
+  // North arrow (on a white tile, so it reads over the colour field) and scale bar.
   const nx = box.x + box.w - 14;
+  doc.roundedRect(nx - 7, box.y + 3, 14, 24, 2).fillColor("#ffffff").fillOpacity(0.9).fill().fillOpacity(1);
   doc.polygon([nx, box.y + 6], [nx + 4, box.y + 16], [nx - 4, box.y + 16]).fillColor(C.ink).fill();
   say(doc, "N", { x: nx - 3, y: box.y + 18, size: 7, weight: "bold", lineBreak: false });
   const metres = niceLength((box.w * 0.25) / s);

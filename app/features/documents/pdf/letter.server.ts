@@ -33,7 +33,7 @@ export async function renderLetter(src: DocumentSource): Promise<Buffer> {
     `Keep the roof doors and hatches locked${doors.length ? ` (${doors.join(", ")})` : ""}; give keys only to people who have been told about the radio areas.`,
     signCount ? `Keep the ${signCount} signs (${[...new Set(a.mitigation.signs.filter((s) => s.category !== "information").map((s) => signLabels[s.category]))].join(", ")}) posted where the plan puts them; replace any that are lost or faded.` : "No warning signs are needed; keep any information signs posted.",
     "Before anyone works on the roof (builders, cleaners, lift or air-conditioning engineers), call the operators so they can reduce or switch off their transmitters; our report lists which ones for each area.",
-    "Do not let anyone stand in front of the antennas or in the shaded areas.",
+    "Do not let anyone stand in front of the antennas or inside the white line on the map below.",
   ], { size: 9 });
   // The map of the level with the largest area over the general-population limit.
   const level = [...a.results.surfaces].filter((s) => s.kind === "area").sort((x, y) => y.areas.overGeneralM2 - x.areas.overGeneralM2)[0];
