@@ -51,7 +51,8 @@ const round3 = (v: number) => Math.round(v * 1000) / 1000;
 /** The areas at or above each threshold, as rings in site metres (d3-contour's isobands, smoothed). */
 export function contourShapes(g: GridGeometry, values: ArrayLike<number>, thresholds: number[]): ContourShape[] {
   const gen = contours().size([g.nx, g.ny]).smooth(true);
-  const list = Array.from(values as ArrayLike<number>);
+  // d3-contour reads values by index: a plain or typed array as it is, anything else copied once.
+  const list = (Array.isArray(values) || values instanceof Float64Array ? values : Array.from(values)) as number[];
   return thresholds.map((value) => {
     const shape = gen.contour(list, value);
     const rings: Ring[] = [];

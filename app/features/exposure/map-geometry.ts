@@ -13,14 +13,14 @@ export type SurfaceGeometry = { field: FieldImage; floor: ContourShape; lines: C
 
 /** Bands, contour lines and class outlines of one surface, in site metres. */
 export function surfaceGeometry(a: AreaView): SurfaceGeometry {
-  const inside = a.classes.map((c) => c !== 255);
+  const inside = Uint8Array.from(a.classes, (c) => (c !== 255 ? 1 : 0));
   const values = extendOutside(a.percent, inside, a.grid.nx, a.grid.ny);
   const classValues = extendOutside(a.classes.map((c) => (c === 255 ? 0 : c)), inside, a.grid.nx, a.grid.ny);
   return {
     field: fieldImage(a.grid, values),
     floor: contourShapes(a.grid, values, [SCALE_MIN_PERCENT])[0],
     lines: contourShapes(a.grid, values, CONTOUR_PERCENTS),
-    classes: classShapes(a.grid, Array.from(classValues)),
+    classes: classShapes(a.grid, classValues),
   };
 }
 
