@@ -16,8 +16,13 @@ export type GridGeometry = { nx: number; ny: number; x0: number; y0: number; ste
  */
 export function extendOutside(values: ArrayLike<number>, inside: ArrayLike<boolean | number>, nx: number, ny: number, passes = 2): Float64Array {
   const out = Float64Array.from(values as ArrayLike<number>);
-  let known = Uint8Array.from(inside as ArrayLike<number>, (v) => (v ? 1 : 0));
-  if (known.every((k) => k === 1)) return out;
+  let known = new Uint8Array(out.length);
+  let all = true;
+  for (let c = 0; c < known.length; c++) {
+    known[c] = inside[c] ? 1 : 0;
+    all &&= known[c] === 1;
+  }
+  if (all) return out;
   for (let pass = 0; pass < passes; pass++) {
     const next = known.slice();
     for (let j = 0; j < ny; j++) {
