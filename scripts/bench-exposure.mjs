@@ -87,9 +87,11 @@ const timings = await page.evaluate(() => ({ all: window.__exposureTimings, spli
 const weightOnly = timings.all.slice(0, timings.split);
 const geometry = timings.all.slice(timings.split);
 console.log(`what-if, off / power edits (re-weighted layers): worker compute ${stats(weightOnly.map((t) => t.computeMs))}`);
+console.log(`                                      maps' geometry in the worker ${stats(weightOnly.map((t) => t.geometryMs ?? 0))}`);
 console.log(`                                      edit → result in the page ${stats(weightOnly.map((t) => t.resultMs))}`);
 console.log(`                                      edit → next frame painted ${stats(weightOnly.filter((t) => t.paintedMs).map((t) => t.paintedMs))}`);
 console.log(`what-if, tilt edits (one emitter re-evaluated):  worker compute ${stats(geometry.map((t) => t.computeMs))}`);
+console.log(`                                      edit → result in the page ${stats(geometry.map((t) => t.resultMs))}`);
 console.log(`                                      edit → next frame painted ${stats(geometry.filter((t) => t.paintedMs).map((t) => t.paintedMs))}`);
 
 // 3. The 3D view's first frame: from the page starting the worker (grid + marching cubes) and loading three.js to the first rendered frame.

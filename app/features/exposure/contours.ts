@@ -16,8 +16,13 @@ export type GridGeometry = { nx: number; ny: number; x0: number; y0: number; ste
  */
 export function extendOutside(values: ArrayLike<number>, inside: ArrayLike<boolean | number>, nx: number, ny: number, passes = 2): Float64Array {
   const out = Float64Array.from(values as ArrayLike<number>);
-  let known = Uint8Array.from(inside as ArrayLike<number>, (v) => (v ? 1 : 0));
-  if (known.every((k) => k === 1)) return out;
+  let known = new Uint8Array(out.length);
+  let all = true;
+  for (let c = 0; c < known.length; c++) {
+    known[c] = inside[c] ? 1 : 0;
+    all &&= known[c] === 1;
+  }
+  if (all) return out;
   for (let pass = 0; pass < passes; pass++) {
     const next = known.slice();
     for (let j = 0; j < ny; j++) {
@@ -51,7 +56,8 @@ const round3 = (v: number) => Math.round(v * 1000) / 1000;
 /** The areas at or above each threshold, as rings in site metres (d3-contour's isobands, smoothed). */
 export function contourShapes(g: GridGeometry, values: ArrayLike<number>, thresholds: number[]): ContourShape[] {
   const gen = contours().size([g.nx, g.ny]).smooth(true);
-  const list = Array.from(values as ArrayLike<number>);
+  // d3-contour reads values by index: a plain or typed array as it is, anything else copied once.
+  const list = (Array.isArray(values) || values instanceof Float64Array ? values : Array.from(values)) as number[];
   return thresholds.map((value) => {
     const shape = gen.contour(list, value);
     const rings: Ring[] = [];

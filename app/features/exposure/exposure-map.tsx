@@ -6,14 +6,13 @@ import { memo, useId, useMemo, useState } from "react";
 import { pointInPolygon, type EmitterInput } from "~/engine";
 import { SitePlan } from "~/features/layout/site-plan";
 import type { PlanFrame, XY } from "~/features/layout/plan-frame";
-import { formatPercent, SCALE_MIN_PERCENT } from "./colour-scale";
-import { classShapes, contourShapes, extendOutside, labelCandidates, ringLength, type Ring } from "./contours";
-import { fieldImage } from "./field-image";
+import { formatPercent } from "./colour-scale";
+import { labelCandidates, ringLength, type Ring } from "./contours";
+import { geometryOf, type SurfaceGeometry } from "./map-geometry";
 import { around, overlapArea, placeLabels, segmentBoxes, textWidth, type Box, type PlacedLabel } from "./map-labels";
 import type { AreaView, EmitterView, ExposureResult } from "./exposure-result";
 import type { ExposureOptions } from "./options";
 import { pointValue, type PointValue } from "./point-value";
-import { CONTOUR_PERCENTS } from "./requests";
 
 export type MapObstruction = { id: string; name: string; polygon: XY[]; heightM: number; baseM: number };
 export type MapAccessPoint = { id: string; name: string; kind: string; x: number; y: number; z: number };
@@ -38,10 +37,11 @@ const NONE: never[] = [];
 const onLevel = (z: number, level: number) => Math.abs(z - level) <= 0.5;
 const pathOf = (frame: PlanFrame, rings: Ring[]) => rings.map((r) => r.map((p, i) => `${i ? "L" : "M"}${frame.toPx(p[0], p[1]).map((v) => v.toFixed(1)).join(" ")}`).join("") + "Z").join("");
 
-export function ExposureLevelMap({ title, engineEmitters, elevationM, areas, result, options, obstructions, accessPoints, width = 960 }: Props) {
+/** Memoised: a render of the page that keeps the same result (an edit before its answer, the pending flag) skips the map. */
+export const ExposureLevelMap = memo(function ExposureLevelMap({ title, engineEmitters, elevationM, areas, result, options, obstructions, accessPoints, width = 960 }: Props) {
   const uid = useId().replace(/[^a-zA-Z0-9_-]/g, "");
   const [hover, setHover] = useState<PointValue | null>(null);
-  const geometry = useMemo(() => areas.map((a) => surfaceGeometry(a)), [areas]);
+  const geometry = useMemo(() => areas.map(geometryOf), [areas]);
   const planSurfaces = useMemo(() => areas.map((a) => ({ id: a.surfaceId, name: a.name, kind: "area" as const, polygon: a.polygon, elevationM: a.elevationM, access: "public" as const })), [areas]);
   const levelAccess = useMemo(() => accessPoints.filter((a) => onLevel(a.z, elevationM)), [accessPoints, elevationM]);
   const levelObstructions = useMemo(() => obstructions.filter((o) => onLevel(o.baseM, elevationM)), [obstructions, elevationM]);
@@ -112,9 +112,9 @@ export function ExposureLevelMap({ title, engineEmitters, elevationM, areas, res
       </figcaption>
     </figure>
   );
-}
+});
 
-type Geometry = ReturnType<typeof surfaceGeometry>;
+type Geometry = SurfaceGeometry;
 
 /** The colour field, class hatching and outlines, and contour lines, clipped to the surfaces; redrawn only when the values change. */
 const FieldLayers = memo(function FieldLayers({ frame, geometry, uid }: { frame: PlanFrame; geometry: Geometry[]; uid: string }) {
@@ -223,19 +223,6 @@ function layoutMarks(frame: PlanFrame, geometry: Geometry[], areas: AreaView[], 
   );
   const blocked = [...marks, ...[...labels.values()].map((l) => l.box)];
   return { emitters, labels, contours: contourLabels(frame, geometry, areas, blocked) };
-}
-
-/** Bands, contour lines and class outlines of one surface, in site metres. */
-function surfaceGeometry(a: AreaView) {
-  const inside = a.classes.map((c) => c !== 255);
-  const values = extendOutside(a.percent, inside, a.grid.nx, a.grid.ny);
-  const classValues = extendOutside(a.classes.map((c) => (c === 255 ? 0 : c)), inside, a.grid.nx, a.grid.ny);
-  return {
-    field: fieldImage(a.grid, values),
-    floor: contourShapes(a.grid, values, [SCALE_MIN_PERCENT])[0],
-    lines: contourShapes(a.grid, values, CONTOUR_PERCENTS),
-    classes: classShapes(a.grid, Array.from(classValues)),
-  };
 }
 
 /** One label per contour ring long enough to carry one: at a place well inside the surface, clear of every mark and label and of the other contour labels. */

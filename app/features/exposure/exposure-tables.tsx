@@ -1,5 +1,6 @@
 // The Exposure page's tables: the worst point of each surface, each emitter's share at those
 // points, the area in each class, and the readings against predictions.
+import { memo } from "react";
 import { StateGlyph } from "~/components/state-glyph";
 import { DateText } from "~/components/date-text";
 import { formatPercent } from "./colour-scale";
@@ -26,7 +27,7 @@ export function Table({ caption, head, children, testId }: { caption: string; he
 
 const xyz = (p: { x: number; y: number; z: number }) => `(${p.x.toFixed(2)}, ${p.y.toFixed(2)}, ${p.z.toFixed(2)})`;
 
-export function WorstPointsTable({ result }: { result: ExposureResult }) {
+export const WorstPointsTable = memo(function WorstPointsTable({ result }: { result: ExposureResult }) {
   const labels = new Map(result.emitters.map((e) => [e.engineId, e.label]));
   const rows = [...result.areas, ...result.facades];
   return (
@@ -65,9 +66,9 @@ export function WorstPointsTable({ result }: { result: ExposureResult }) {
       ))}
     </Table>
   );
-}
+});
 
-export function ContributionsTable({ result }: { result: ExposureResult }) {
+export const ContributionsTable = memo(function ContributionsTable({ result }: { result: ExposureResult }) {
   const surfaces = [...result.areas, ...result.facades];
   const share = surfaces.map((s) => new Map(s.contributions.map((c) => [c.id, c.percent])));
   return (
@@ -109,11 +110,11 @@ export function ContributionsTable({ result }: { result: ExposureResult }) {
       </tr>
     </Table>
   );
-}
+});
 
 const m2 = (v: number) => (v === 0 ? "0" : v < 10 ? v.toFixed(2) : v.toFixed(1));
 
-export function AreasTable({ result }: { result: ExposureResult }) {
+export const AreasTable = memo(function AreasTable({ result }: { result: ExposureResult }) {
   return (
     <Table
       caption="Area in each class, per surface (m²)"
@@ -147,11 +148,11 @@ export function AreasTable({ result }: { result: ExposureResult }) {
       })}
     </Table>
   );
-}
+});
 
 const units: Record<string, string> = { "W/m2": "W/m²", "mW/cm2": "mW/cm²", "uW/cm2": "µW/cm²", percent: "%" };
 
-export function ReadingsSummaryNotice({ result }: { result: ExposureResult }) {
+export const ReadingsSummaryNotice = memo(function ReadingsSummaryNotice({ result }: { result: ExposureResult }) {
   const s = result.readingsSummary;
   if (!s.count) return null;
   if (!s.above)
@@ -173,9 +174,9 @@ export function ReadingsSummaryNotice({ result }: { result: ExposureResult }) {
       </p>
     </div>
   );
-}
+});
 
-export function ReadingsTable({ result }: { result: ExposureResult }) {
+export const ReadingsTable = memo(function ReadingsTable({ result }: { result: ExposureResult }) {
   return (
     <Table
       caption="Readings against predictions"
@@ -221,6 +222,6 @@ export function ReadingsTable({ result }: { result: ExposureResult }) {
       ))}
     </Table>
   );
-}
+});
 
 export const signed = (v: number) => `${v >= 0 ? "+" : "−"}${Math.abs(v).toFixed(1)}`;

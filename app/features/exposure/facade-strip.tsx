@@ -1,5 +1,6 @@
 // A facade as an elevation strip: distance along the facade (from its first end) across, height
 // up, on the map's colour scale, with the 100 % line, the class outlines and the worst point.
+import { memo } from "react";
 import { formatPercent, SCALE_MIN_PERCENT } from "./colour-scale";
 import { classShapes, contourShapes, type Ring } from "./contours";
 import type { FacadeView } from "./exposure-result";
@@ -7,7 +8,8 @@ import { fieldImage } from "./field-image";
 
 const PAD = { left: 44, right: 12, top: 24, bottom: 30 };
 
-export function FacadeStrip({ facade, width = 960 }: { facade: FacadeView; width?: number }) {
+/** Memoised: redrawn only when its facade's values change. */
+export const FacadeStrip = memo(function FacadeStrip({ facade, width = 960 }: { facade: FacadeView; width?: number }) {
   const { along, heights } = facade;
   const length = along[along.length - 1] ?? 0;
   const bottom = heights[0] ?? 0;
@@ -91,4 +93,4 @@ export function FacadeStrip({ facade, width = 960 }: { facade: FacadeView; width
       ) : null}
     </svg>
   );
-}
+});

@@ -1,12 +1,14 @@
 // The map's legend: the colour bar on its log axis, the contour lines, the four classes of
 // 47 CFR §1.1307(b)(2)/(b)(4), the symbols, and the basis (standard, tier, heights, grid, date).
+import { memo } from "react";
 import { DateText } from "~/components/date-text";
 import { bandColour, bandThresholds, colourOf, legendTicks } from "./colour-scale";
 import { CLASS_NAMES } from "./evaluate-site";
 import { describeHeights, standardLabels, tierLabels, type ExposureOptions } from "./options";
 import { CONTOUR_PERCENTS } from "./requests";
 
-export function MapLegend({ options, generatedAt, whatIf }: { options: ExposureOptions; generatedAt: string; whatIf: boolean }) {
+/** Memoised: the page re-renders on every what-if edit; the legend changes only with the options or the what-if flag. */
+export const MapLegend = memo(function MapLegend({ options, generatedAt, whatIf }: { options: ExposureOptions; generatedAt: string; whatIf: boolean }) {
   const bands = bandThresholds();
   const W = 360;
   return (
@@ -57,7 +59,7 @@ export function MapLegend({ options, generatedAt, whatIf }: { options: ExposureO
       </dl>
     </div>
   );
-}
+});
 
 const capital = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
 

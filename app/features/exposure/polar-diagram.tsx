@@ -1,6 +1,7 @@
 // An antenna pattern as two small polar diagrams: the horizontal cut turned to the emitter's
 // azimuth (north up, as on the plan) and the vertical cut seen from the side (boresight to the
 // right, tilted down). Radius: relative gain in dB, 0 dB at the rim, −30 dB at the centre.
+import { memo } from "react";
 import { patternAttenuationDb, preparePattern } from "~/engine";
 import type { EnginePattern } from "~/infra/db/schema/emitters";
 
@@ -30,7 +31,9 @@ function cut(p: ReturnType<typeof preparePattern>, plane: "h" | "v") {
   return pts;
 }
 
-export function PolarDiagrams({ pattern, azimuthDeg, tiltDeg, label }: { pattern: EnginePattern; azimuthDeg: number; tiltDeg: number; label: string }) {
+type Props = { pattern: EnginePattern; azimuthDeg: number; tiltDeg: number; label: string };
+
+function Diagrams({ pattern, azimuthDeg, tiltDeg, label }: Props) {
   const { h, v } = cuts(pattern);
   // Horizontal: bearing = azimuth + φ, clockwise from north (up).
   const hPath = h.map(([a, r], i) => {
@@ -55,6 +58,13 @@ export function PolarDiagrams({ pattern, azimuthDeg, tiltDeg, label }: { pattern
     </div>
   );
 }
+
+/** Redrawn only when the emitter's pattern, azimuth or tilt changes: a what-if result carries the own patterns as new but equal objects. */
+export const PolarDiagrams = memo(
+  Diagrams,
+  (a: Props, b: Props) =>
+    a.azimuthDeg === b.azimuthDeg && a.tiltDeg === b.tiltDeg && a.label === b.label && (a.pattern === b.pattern || JSON.stringify(a.pattern) === JSON.stringify(b.pattern)),
+);
 
 function Frame({ title, children }: { title: string; children: React.ReactNode }) {
   return (

@@ -2,10 +2,11 @@
 // else the worker's), and the timings (edit → result; the bench script reads them).
 import { useCallback, useEffect, useRef, useState } from "react";
 import type { ExposureInput, ExposureResult } from "./exposure-result";
+import { keepGeometry } from "./map-geometry";
 import { cleanEdits, hasEdits, type EmitterEdit, type WhatIfEdits } from "./what-if";
 import type { WorkerAnswer, WorkerRequest } from "./what-if.worker";
 
-export type WhatIfTiming = { seq: number; computeMs: number; resultMs: number };
+export type WhatIfTiming = { seq: number; computeMs: number; geometryMs: number; resultMs: number };
 declare global {
   interface Window {
     __exposureTimings?: (WhatIfTiming & { paintedMs?: number })[];
@@ -35,7 +36,8 @@ export function useWhatIf(input: ExposureInput, base: ExposureResult | null) {
         setState("failed");
         return;
       }
-      const t = { seq: answer.seq, computeMs: answer.computeMs, resultMs: performance.now() - (sentAt.current.get(answer.seq) ?? performance.now()) };
+      keepGeometry(answer.result.areas, answer.geometry);
+      const t = { seq: answer.seq, computeMs: answer.computeMs, geometryMs: answer.geometryMs, resultMs: performance.now() - (sentAt.current.get(answer.seq) ?? performance.now()) };
       setResult(answer.result);
       setTiming(t);
       setError(null);

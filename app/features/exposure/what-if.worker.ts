@@ -1,12 +1,13 @@
 // The what-if Web Worker: holds one what-if model (the page's inventory and options) and answers
-// each edit with the recomputed result. Edits that arrive while it is busy are coalesced: only
+// each edit with the recomputed result and its maps' geometry (image, contours, class outlines). Edits that arrive while it is busy are coalesced: only
 // the newest is computed.
 import type { ExposureInput, ExposureResult } from "./exposure-result";
 import type { WhatIfEdits } from "./what-if";
+import { surfaceGeometry, type SurfaceGeometry } from "./map-geometry";
 import { createWhatIfModel, type WhatIfModel } from "./what-if-model";
 
 export type WorkerRequest = { type: "init"; input: ExposureInput; base: ExposureResult | null } | { type: "compute"; seq: number; edits: WhatIfEdits };
-export type WorkerAnswer = { type: "ready"; primeMs: number } | { type: "result"; seq: number; result: ExposureResult; computeMs: number } | { type: "error"; seq: number; message: string };
+export type WorkerAnswer = { type: "ready"; primeMs: number } | { type: "result"; seq: number; result: ExposureResult; geometry: SurfaceGeometry[]; computeMs: number; geometryMs: number } | { type: "error"; seq: number; message: string };
 
 let model: (WhatIfModel & { prime: () => void }) | null = null;
 let pending: { seq: number; edits: WhatIfEdits } | null = null;
@@ -22,7 +23,10 @@ function run() {
   const started = performance.now();
   try {
     const result = model.compute(job.edits);
-    post({ type: "result", seq: job.seq, result, computeMs: performance.now() - started });
+    const computed = performance.now();
+    // The map's image and contours too, here rather than on the page's thread (map-geometry.ts).
+    const geometry = result.areas.map(surfaceGeometry);
+    post({ type: "result", seq: job.seq, result, geometry, computeMs: computed - started, geometryMs: performance.now() - computed });
   } catch (error) {
     post({ type: "error", seq: job.seq, message: error instanceof Error ? error.message : String(error) });
   }

@@ -158,6 +158,7 @@ function ExposureResults({
     () => engineEmittersOf(input, result?.edits ?? {}),
     [input, result],
   );
+  const levels = useMemo(() => levelsOf(result?.areas ?? []), [result]);
   const base = `/sites/${site.id}`;
   const tier = tierLabels[options.standard][options.tier];
   const labels = new Map(input.emitters.map((e) => [e.id, e.label]));
@@ -203,7 +204,7 @@ function ExposureResults({
               </EmptyState>
             ) : null}
 
-            {levelsOf(result.areas).map((level, k, all) => {
+            {levels.map((level, k, all) => {
               const map = (
                 <Card
                   key={level.elevationM}
