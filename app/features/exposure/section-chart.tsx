@@ -3,7 +3,8 @@
 // antennas near the cut, and the 100 % boundary of each tier as labelled lines.
 import { useId, useMemo, useRef, useState, type MouseEvent } from "react";
 import type { Tier } from "~/engine";
-import { percentLabel, percentRgb } from "./colour-scale";
+import { percentLabel } from "./colour-scale";
+import { fieldImage } from "./field-image";
 import { BoundaryLine } from "./section-legend";
 import type { LevelCrossing, SectionGrid, SolidCrossing } from "./section-geometry";
 
@@ -28,28 +29,9 @@ export function verticalExaggeration(heightM: number, pxPerM: number, minPx = 30
   return want <= 1 ? 1 : Math.min(4, Math.ceil(want * 2) / 2);
 }
 
+/** The cut's colour field: the maps' own image of a grid (one pixel a node, rows from the top down). */
 function useFieldImage(grid: SectionGrid, values: Float64Array) {
-  return useMemo(() => {
-    if (typeof document === "undefined") return null;
-    const canvas = document.createElement("canvas");
-    canvas.width = grid.ns;
-    canvas.height = grid.nz;
-    const ctx = canvas.getContext("2d");
-    if (!ctx) return null;
-    const img = ctx.createImageData(grid.ns, grid.nz);
-    for (let k = 0; k < grid.nz; k++) {
-      for (let i = 0; i < grid.ns; i++) {
-        const [r, g, b] = percentRgb(values[k * grid.ns + i]);
-        const o = ((grid.nz - 1 - k) * grid.ns + i) * 4;
-        img.data[o] = r;
-        img.data[o + 1] = g;
-        img.data[o + 2] = b;
-        img.data[o + 3] = 255;
-      }
-    }
-    ctx.putImageData(img, 0, 0);
-    return canvas.toDataURL("image/png");
-  }, [grid, values]);
+  return useMemo(() => fieldImage({ x0: 0, y0: 0, step: 1, nx: grid.ns, ny: grid.nz }, values).href, [grid, values]);
 }
 
 export function SectionChart({ grid, values, readout = [], boundaries, levels, obstructions, antennas, people, width = 960 }: Props) {

@@ -162,6 +162,22 @@ function ExposureResults({
   const base = `/sites/${site.id}`;
   const tier = tierLabels[options.standard][options.tier];
   const labels = new Map(input.emitters.map((e) => [e.id, e.label]));
+  const levelCard = (level: (typeof levels)[number], width: number) =>
+    result ? (
+      <Card key={level.elevationM} title={`${level.areas.map((a) => a.name).join(", ")} · level ${signed(level.elevationM)} m`}>
+        <ExposureLevelMap
+          title={`Exposure map of ${site.name}, level ${signed(level.elevationM)} m`}
+          elevationM={level.elevationM}
+          areas={level.areas}
+          result={result}
+          engineEmitters={engineList}
+          options={options}
+          obstructions={obstructions}
+          accessPoints={accessPoints}
+          width={width}
+        />
+      </Card>
+    ) : null;
   return (
     <div
       className="space-y-6"
@@ -204,51 +220,11 @@ function ExposureResults({
               </EmptyState>
             ) : null}
 
-            {levels.map((level, k, all) => {
-              const map = (
-                <Card
-                  key={level.elevationM}
-                  title={`${level.areas.map((a) => a.name).join(", ")} · level ${signed(level.elevationM)} m`}
-                >
-                  <ExposureLevelMap
-                    title={`Exposure map of ${site.name}, level ${signed(level.elevationM)} m`}
-                    elevationM={level.elevationM}
-                    areas={level.areas}
-                    result={result}
-                    engineEmitters={engineList}
-                    options={options}
-                    obstructions={obstructions}
-                    accessPoints={accessPoints}
-                    width={k === 0 ? 960 : 560}
-                  />
-                </Card>
-              );
-              if (k === 0) return map;
-              if (k > 1) return null;
+            {levels.length > 0 ? levelCard(levels[0], 960) : null}
+            {levels.length > 1 ? (
               // The other levels side by side on wide screens.
-              return (
-                <div key="others" className="grid gap-6 lg:grid-cols-2">
-                  {all.slice(1).map((l) => (
-                    <Card
-                      key={l.elevationM}
-                      title={`${l.areas.map((a) => a.name).join(", ")} · level ${signed(l.elevationM)} m`}
-                    >
-                      <ExposureLevelMap
-                        title={`Exposure map of ${site.name}, level ${signed(l.elevationM)} m`}
-                        elevationM={l.elevationM}
-                        areas={l.areas}
-                        result={result}
-                        engineEmitters={engineList}
-                        options={options}
-                        obstructions={obstructions}
-                        accessPoints={accessPoints}
-                        width={560}
-                      />
-                    </Card>
-                  ))}
-                </div>
-              );
-            })}
+              <div className="grid gap-6 lg:grid-cols-2">{levels.slice(1).map((l) => levelCard(l, 560))}</div>
+            ) : null}
 
             {result.facades.map((f) => (
               <Card key={f.surfaceId} title={`${f.name} · facade`}>
