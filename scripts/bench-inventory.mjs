@@ -8,7 +8,9 @@
 // BENCH_SECONDS (per target, default 10), BENCH_CONNECTIONS (default 20), BENCH_SITES, BENCH_EMITTERS.
 // With APP_PID (set by `with-stack` when it starts the app) it also prints the server's CPU time
 // per request, the figure a busy machine disturbs least. BENCH_ONLY=<regex> measures only the
-// targets whose name matches.
+// targets whose name matches. BENCH_SEED_ONLY=1 seeds, prints the session cookie, token and site id as
+// JSON, and keeps the bench organisation (for profiling by hand; the test stack's database is rebuilt
+// by the next `npm test`).
 import { createHash, createHmac, randomBytes, randomUUID } from "node:crypto";
 import { readFileSync } from "node:fs";
 import autocannon from "autocannon";
@@ -99,6 +101,11 @@ function measure(name, path, headers) {
 
 async function main() {
   const { org, cookie, apiToken, siteId } = await seed();
+  if (process.env.BENCH_SEED_ONLY) {
+    // For profiling by hand: keep the bench organisation and print what reaches it.
+    console.log(JSON.stringify({ org, cookie, apiToken, siteId }));
+    return await sql.end();
+  }
   try {
     const targets = [
       ["GET /api/v1/sites (token)", "/api/v1/sites", { authorization: `Bearer ${apiToken}` }],

@@ -1,6 +1,6 @@
 // The sites, clients, history and token API: with a session and with a token, validation,
 // optimistic concurrency, roles and organisation isolation.
-import { eq } from "drizzle-orm";
+import { eq, sql } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { db, schema } from "~/infra/db.server";
 import * as clientsApi from "~/routes/api/v1/clients";
@@ -79,6 +79,29 @@ describe("GET /api/v1/sites", () => {
     expect(got.body).toMatchObject({ total: 3, page: 2, pageSize: 2 });
     expect(got.body.sites).toHaveLength(1);
     expect(Object.keys(got.body.sites[0]).sort()).toEqual(["city", "clientId", "emitterCount", "id", "kind", "name", "updatedAt"]);
+  });
+
+  it("searches name, city and address, ignoring case, with % and _ taken literally", async () => {
+    const made = [
+      { name: "Quarry Mast", kind: "tower", city: "Port Lowan", address: "1 Shore Rd" },
+      { name: "Depot roof", kind: "rooftop", city: "QUARRYTON", address: "" },
+      { name: "Pole 7", kind: "street-pole", city: "", address: "Old quarry lane" },
+      { name: "100% Tower_1", kind: "tower", city: "", address: "" },
+      { name: "1000 Tower-1", kind: "tower", city: "", address: "" },
+    ];
+    for (const json of made) expect((await callApi(sitesApi, "POST", "/api/v1/sites", { auth: eng(), json })).status).toBe(201);
+    const names = async (q: string) => {
+      const got = await callApi(sitesApi, "GET", `/api/v1/sites?q=${encodeURIComponent(q)}&pageSize=100`, { auth: { token } });
+      expect(got.status).toBe(200);
+      expect(got.body.total).toBe(got.body.sites.length);
+      return got.body.sites.map((s: { name: string }) => s.name).sort();
+    };
+    expect(await names("quarry")).toEqual(["Depot roof", "Pole 7", "Quarry Mast"]);
+    expect(await names("0% Tower_")).toEqual(["100% Tower_1"]);
+    expect(await names("er_1")).toEqual(["100% Tower_1"]);
+    // The search's index (migration 0014) exists with the trigram operator class.
+    const [index] = await db.execute<{ def: string }>(sql`select indexdef as def from pg_indexes where indexname = 'site_search_idx'`);
+    expect(index.def).toContain("gin_trgm_ops");
   });
 
   it("lets billing read, and refuses client and regulator members", async () => {
