@@ -5,8 +5,6 @@
 // delivered with the letter attached, a failing job retried, and a render that survives kill -9.
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import { createHash, randomUUID } from "node:crypto";
-import { mkdtempSync, writeFileSync } from "node:fs";
-import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { and, eq, sql } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -55,9 +53,7 @@ const render = (documentId: string) => renderJob({ id: randomUUID(), data: { doc
 const row = async (id: string) => (await db.select().from(schema.document).where(eq(schema.document.id, id)))[0];
 
 function pdftotext(pdf: Buffer) {
-  const dir = mkdtempSync(join(tmpdir(), "isotrope-pdf-"));
-  writeFileSync(join(dir, "x.pdf"), pdf);
-  const out = spawnSync("pdftotext", ["-layout", join(dir, "x.pdf"), "-"], { encoding: "utf8" });
+  const out = spawnSync("pdftotext", ["-layout", "-", "-"], { input: pdf, encoding: "utf8" });
   expect(out.status, out.stderr).toBe(0);
   return out.stdout;
 }
