@@ -99,7 +99,7 @@ describe("GET /api/v1/sites", () => {
     expect(await names("quarry")).toEqual(["Depot roof", "Pole 7", "Quarry Mast"]);
     expect(await names("0% Tower_")).toEqual(["100% Tower_1"]);
     expect(await names("er_1")).toEqual(["100% Tower_1"]);
-    // The search's index (migration 0014) exists with the trigram operator class.
+    // The search's index (migration 0015) exists with the trigram operator class.
     const [index] = await db.execute<{ def: string }>(sql`select indexdef as def from pg_indexes where indexname = 'site_search_idx'`);
     expect(index.def).toContain("gin_trgm_ops");
   });

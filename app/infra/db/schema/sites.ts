@@ -35,7 +35,7 @@ export const site = pgTable(
     // With the id, so a page sorted by emitter count (most sites tie) is read off the index either way.
     index("site_org_emitters_idx").on(t.organizationId, t.emitterCount, t.id),
     index("site_client_idx").on(t.clientId),
-    // Trigram index (pg_trgm, created by migration 0014) for the list's search, `%text%` on name,
+    // Trigram index (pg_trgm, migrations 0014 and 0015) for the list's search, `%text%` on name,
     // city or address: a bitmap scan of the matches instead of testing every site of the organisation.
     index("site_search_idx").using("gin", t.name.op("gin_trgm_ops"), t.city.op("gin_trgm_ops"), t.address.op("gin_trgm_ops")),
   ],

@@ -1,0 +1,1 @@
+CREATE INDEX "site_search_idx" ON "site" USING gin ("name" gin_trgm_ops,"city" gin_trgm_ops,"address" gin_trgm_ops);
