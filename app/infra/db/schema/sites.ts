@@ -34,6 +34,9 @@ export const site = pgTable(
     index("site_org_updated_idx").on(t.organizationId, t.updatedAt),
     // With the id, so a page sorted by emitter count (most sites tie) is read off the index either way.
     index("site_org_emitters_idx").on(t.organizationId, t.emitterCount, t.id),
+    // Kind and city tie often too: a page sorted by either is read off its index, not sorted whole.
+    index("site_org_kind_idx").on(t.organizationId, t.kind, t.id),
+    index("site_org_city_idx").on(t.organizationId, t.city, t.id),
     index("site_client_idx").on(t.clientId),
     // Trigram index (pg_trgm, migrations 0014 and 0015) for the list's search, `%text%` on name,
     // city or address: a bitmap scan of the matches instead of testing every site of the organisation.
