@@ -90,18 +90,25 @@ console.log(`what-if, off / power edits (re-weighted layers): worker compute ${s
 console.log(`                                      maps' geometry in the worker ${stats(weightOnly.map((t) => t.geometryMs ?? 0))}`);
 console.log(`                                      edit → result in the page ${stats(weightOnly.map((t) => t.resultMs))}`);
 console.log(`                                      edit → next frame painted ${stats(weightOnly.filter((t) => t.paintedMs).map((t) => t.paintedMs))}`);
+// Where the time of an off/power edit goes, one phase after the other (medians; the worker's clock is aligned on the wall clock).
+const phase = (f) => stats(weightOnly.filter((t) => t.paintedMs && t.committedMs).map(f));
+console.log(`  phases: edit → worker starts               ${phase((t) => t.startedMs)}`);
+console.log(`          worker: compute + geometry         ${phase((t) => t.postedMs - t.startedMs)}`);
+console.log(`          answer posted → handled by the page ${phase((t) => t.resultMs - t.postedMs)}`);
+console.log(`          handled → React committed          ${phase((t) => t.committedMs - t.resultMs)}`);
+console.log(`          committed → next frame painted     ${phase((t) => t.paintedMs - t.committedMs)}`);
 console.log(`what-if, tilt edits (one emitter re-evaluated):  worker compute ${stats(geometry.map((t) => t.computeMs))}`);
 console.log(`                                      edit → result in the page ${stats(geometry.map((t) => t.resultMs))}`);
 console.log(`                                      edit → next frame painted ${stats(geometry.filter((t) => t.paintedMs).map((t) => t.paintedMs))}`);
 
 // 3. The 3D view's first frame: from the page starting the worker (grid + marching cubes) and loading three.js to the first rendered frame.
 const first = [];
-for (let r = 0; r < Math.max(2, Math.ceil(runs / 3)); r++) {
+for (let r = 0; process.env.SKIP_SOLID !== "1" && r < Math.max(2, Math.ceil(runs / 3)); r++) {
   await page.goto(`${url}/solid`);
   await page.getByTestId("solid-summary").waitFor({ timeout: 120_000 });
   const [d] = await page.evaluate(() => performance.getEntriesByName("solid-first-frame").map((m) => m.detail));
   first.push(d.firstFrameMs);
 }
-console.log(`3D view, first frame after start (software WebGL):  ${stats(first)}`);
+if (first.length) console.log(`3D view, first frame after start (software WebGL):  ${stats(first)}`);
 console.log(`load average ${loadavg().map((l) => l.toFixed(1)).join(" / ")} at the end`);
 await browser.close();

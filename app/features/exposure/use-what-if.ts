@@ -1,17 +1,20 @@
 // The page's what-if state: the edits, the result drawn (the loader's while there are no edits,
 // else the worker's), and the timings (edit → result; the bench script reads them).
-import { useCallback, useEffect, useRef, useState } from "react";
+import { useCallback, useEffect, useLayoutEffect, useRef, useState } from "react";
 import type { ExposureInput, ExposureResult } from "./exposure-result";
 import { keepGeometry } from "./map-geometry";
 import { cleanEdits, hasEdits, type EmitterEdit, type WhatIfEdits } from "./what-if";
 import type { WorkerAnswer, WorkerRequest } from "./what-if.worker";
 
 export type WhatIfTiming = { seq: number; computeMs: number; geometryMs: number; resultMs: number };
+/** For the bench script: every phase from the edit (ms after it): the worker starting on it, posting its answer, the page receiving it, React committing it, the next frame painted. */
+type Phases = { startedMs: number; postedMs: number; committedMs?: number; paintedMs?: number };
 declare global {
   interface Window {
-    __exposureTimings?: (WhatIfTiming & { paintedMs?: number })[];
+    __exposureTimings?: (WhatIfTiming & Phases)[];
   }
 }
+const wall = () => performance.timeOrigin + performance.now();
 
 export function useWhatIf(input: ExposureInput, base: ExposureResult | null) {
   const [edits, setEdits] = useState<WhatIfEdits>({});
@@ -22,6 +25,7 @@ export function useWhatIf(input: ExposureInput, base: ExposureResult | null) {
   const worker = useRef<Worker | null>(null);
   const seq = useRef(0);
   const sentAt = useRef(new Map<number, number>());
+  const toCommit = useRef<(WhatIfTiming & Phases) | null>(null);
 
   useEffect(() => {
     if (!base) return;
@@ -37,7 +41,9 @@ export function useWhatIf(input: ExposureInput, base: ExposureResult | null) {
         return;
       }
       keepGeometry(answer.result.areas, answer.geometry);
-      const t = { seq: answer.seq, computeMs: answer.computeMs, geometryMs: answer.geometryMs, resultMs: performance.now() - (sentAt.current.get(answer.seq) ?? performance.now()) };
+      const sent = sentAt.current.get(answer.seq) ?? wall();
+      const t = { seq: answer.seq, computeMs: answer.computeMs, geometryMs: answer.geometryMs, resultMs: wall() - sent, startedMs: answer.startedAt - sent, postedMs: answer.postedAt - sent };
+      toCommit.current = t;
       setResult(answer.result);
       setTiming(t);
       setError(null);
@@ -45,7 +51,7 @@ export function useWhatIf(input: ExposureInput, base: ExposureResult | null) {
       const list = (window.__exposureTimings ??= []);
       list.push(t);
       // Painted: the frame after React has committed the new map.
-      requestAnimationFrame(() => setTimeout(() => Object.assign(t, { paintedMs: performance.now() - (sentAt.current.get(answer.seq) ?? 0) }), 0));
+      requestAnimationFrame(() => setTimeout(() => Object.assign(t, { paintedMs: wall() - sent }), 0));
     };
     w.onerror = () => {
       setError("The what-if calculator could not start in this browser.");
@@ -63,7 +69,7 @@ export function useWhatIf(input: ExposureInput, base: ExposureResult | null) {
       setTiming(null);
       return;
     }
-    sentAt.current.set(id, performance.now());
+    sentAt.current.set(id, wall());
     setState("computing");
     worker.current?.postMessage({ type: "compute", seq: id, edits: next } satisfies WorkerRequest);
   }, [input]);
@@ -77,6 +83,14 @@ export function useWhatIf(input: ExposureInput, base: ExposureResult | null) {
     },
     [edits, send],
   );
+
+  // After React has committed a worker's answer (this hook's component commits after its children).
+  useLayoutEffect(() => {
+    const t = toCommit.current;
+    if (!t || !result) return;
+    toCommit.current = null;
+    t.committedMs = wall() - (sentAt.current.get(t.seq) ?? wall());
+  }, [result]);
 
   const reset = useCallback(() => send({}), [send]);
   const active = hasEdits(cleanEdits(input.emitters, edits));

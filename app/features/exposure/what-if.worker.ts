@@ -7,7 +7,7 @@ import { surfaceGeometry, type SurfaceGeometry } from "./map-geometry";
 import { createWhatIfModel, type WhatIfModel } from "./what-if-model";
 
 export type WorkerRequest = { type: "init"; input: ExposureInput; base: ExposureResult | null } | { type: "compute"; seq: number; edits: WhatIfEdits };
-export type WorkerAnswer = { type: "ready"; primeMs: number } | { type: "result"; seq: number; result: ExposureResult; geometry: SurfaceGeometry[]; computeMs: number; geometryMs: number } | { type: "error"; seq: number; message: string };
+export type WorkerAnswer = { type: "ready"; primeMs: number } | { type: "result"; seq: number; result: ExposureResult; geometry: SurfaceGeometry[]; computeMs: number; geometryMs: number; startedAt: number; postedAt: number } | { type: "error"; seq: number; message: string };
 
 let model: (WhatIfModel & { prime: () => void }) | null = null;
 let pending: { seq: number; edits: WhatIfEdits } | null = null;
@@ -26,7 +26,9 @@ function run() {
     const computed = performance.now();
     // The map's image and contours too, here rather than on the page's thread (map-geometry.ts).
     const geometry = result.areas.map(surfaceGeometry);
-    post({ type: "result", seq: job.seq, result, geometry, computeMs: computed - started, geometryMs: performance.now() - computed });
+    const done = performance.now();
+    // startedAt / postedAt on the wall clock (the page's performance.now() has another origin): the bench splits the wait.
+    post({ type: "result", seq: job.seq, result, geometry, computeMs: computed - started, geometryMs: done - computed, startedAt: performance.timeOrigin + started, postedAt: performance.timeOrigin + done });
   } catch (error) {
     post({ type: "error", seq: job.seq, message: error instanceof Error ? error.message : String(error) });
   }
