@@ -13,9 +13,17 @@ export type SurfaceGeometry = { field: FieldImage; floor: ContourShape; lines: C
 
 /** Bands, contour lines and class outlines of one surface, in site metres. */
 export function surfaceGeometry(a: AreaView): SurfaceGeometry {
-  const inside = Uint8Array.from(a.classes, (c) => (c !== 255 ? 1 : 0));
+  // Loops rather than the mapping forms of from/map: those took half the geometry's time.
+  const n = a.classes.length;
+  const inside = new Uint8Array(n);
+  const plain = new Float64Array(n);
+  for (let c = 0; c < n; c++) {
+    const k = a.classes[c];
+    inside[c] = k !== 255 ? 1 : 0;
+    plain[c] = k === 255 ? 0 : k;
+  }
   const values = extendOutside(a.percent, inside, a.grid.nx, a.grid.ny);
-  const classValues = extendOutside(a.classes.map((c) => (c === 255 ? 0 : c)), inside, a.grid.nx, a.grid.ny);
+  const classValues = extendOutside(plain, inside, a.grid.nx, a.grid.ny);
   return {
     field: fieldImage(a.grid, values),
     floor: contourShapes(a.grid, values, [SCALE_MIN_PERCENT])[0],
