@@ -2,7 +2,7 @@
 // else the worker's), and the timings (edit → result; the bench script reads them).
 import { useCallback, useEffect, useLayoutEffect, useRef, useState } from "react";
 import type { ExposureInput, ExposureResult } from "./exposure-result";
-import { keepGeometry } from "./map-geometry";
+import { keepFacadeGeometry, keepGeometry } from "./map-geometry";
 import { cleanEdits, hasEdits, type EmitterEdit, type WhatIfEdits } from "./what-if";
 import type { WorkerAnswer, WorkerRequest } from "./what-if.worker";
 
@@ -41,6 +41,7 @@ export function useWhatIf(input: ExposureInput, base: ExposureResult | null) {
         return;
       }
       keepGeometry(answer.result.areas, answer.geometry);
+      keepFacadeGeometry(answer.result.facades, answer.facadeGeometry);
       const sent = sentAt.current.get(answer.seq) ?? wall();
       const t = { seq: answer.seq, computeMs: answer.computeMs, geometryMs: answer.geometryMs, resultMs: wall() - sent, startedMs: answer.startedAt - sent, postedMs: answer.postedAt - sent };
       toCommit.current = t;

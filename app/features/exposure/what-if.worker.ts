@@ -1,13 +1,13 @@
 // The what-if Web Worker: holds one what-if model (the page's inventory and options) and answers
-// each edit with the recomputed result and its maps' geometry (image, contours, class outlines). Edits that arrive while it is busy are coalesced: only
+// each edit with the recomputed result and its maps' and facade strips' geometry (image, contours, class outlines). Edits that arrive while it is busy are coalesced: only
 // the newest is computed.
 import type { ExposureInput, ExposureResult } from "./exposure-result";
 import type { WhatIfEdits } from "./what-if";
-import { surfaceGeometry, type SurfaceGeometry } from "./map-geometry";
+import { facadeGeometry, surfaceGeometry, type FacadeGeometry, type SurfaceGeometry } from "./map-geometry";
 import { createWhatIfModel, type WhatIfModel } from "./what-if-model";
 
 export type WorkerRequest = { type: "init"; input: ExposureInput; base: ExposureResult | null } | { type: "compute"; seq: number; edits: WhatIfEdits };
-export type WorkerAnswer = { type: "ready"; primeMs: number } | { type: "result"; seq: number; result: ExposureResult; geometry: SurfaceGeometry[]; computeMs: number; geometryMs: number; startedAt: number; postedAt: number } | { type: "error"; seq: number; message: string };
+export type WorkerAnswer = { type: "ready"; primeMs: number } | { type: "result"; seq: number; result: ExposureResult; geometry: SurfaceGeometry[]; facadeGeometry: FacadeGeometry[]; computeMs: number; geometryMs: number; startedAt: number; postedAt: number } | { type: "error"; seq: number; message: string };
 
 let model: (WhatIfModel & { prime: () => void }) | null = null;
 let pending: { seq: number; edits: WhatIfEdits } | null = null;
@@ -26,9 +26,10 @@ function run() {
     const computed = performance.now();
     // The map's image and contours too, here rather than on the page's thread (map-geometry.ts).
     const geometry = result.areas.map(surfaceGeometry);
+    const facades = result.facades.map(facadeGeometry);
     const done = performance.now();
     // startedAt / postedAt on the wall clock (the page's performance.now() has another origin): the bench splits the wait.
-    post({ type: "result", seq: job.seq, result, geometry, computeMs: computed - started, geometryMs: done - computed, startedAt: performance.timeOrigin + started, postedAt: performance.timeOrigin + done });
+    post({ type: "result", seq: job.seq, result, geometry, facadeGeometry: facades, computeMs: computed - started, geometryMs: done - computed, startedAt: performance.timeOrigin + started, postedAt: performance.timeOrigin + done });
   } catch (error) {
     post({ type: "error", seq: job.seq, message: error instanceof Error ? error.message : String(error) });
   }
