@@ -4,6 +4,7 @@ import { useCallback, useEffect, useLayoutEffect, useRef, useState } from "react
 import type { ExposureInput, ExposureResult } from "./exposure-result";
 import { keepFacadeGeometry, keepGeometry } from "./map-geometry";
 import { cleanEdits, hasEdits, type EmitterEdit, type WhatIfEdits } from "./what-if";
+import { unpackAreas } from "./what-if-transfer";
 import type { WorkerAnswer, WorkerRequest } from "./what-if.worker";
 
 export type WhatIfTiming = { seq: number; computeMs: number; geometryMs: number; resultMs: number };
@@ -40,12 +41,13 @@ export function useWhatIf(input: ExposureInput, base: ExposureResult | null) {
         setState("failed");
         return;
       }
-      keepGeometry(answer.result.areas, answer.geometry);
-      keepFacadeGeometry(answer.result.facades, answer.facadeGeometry);
+      const result: ExposureResult = { ...answer.result, areas: unpackAreas(answer.result.areas) };
+      keepGeometry(result.areas, answer.geometry);
+      keepFacadeGeometry(result.facades, answer.facadeGeometry);
       const sent = sentAt.current.get(answer.seq) ?? wall();
       const t = { seq: answer.seq, computeMs: answer.computeMs, geometryMs: answer.geometryMs, resultMs: wall() - sent, startedMs: answer.startedAt - sent, postedMs: answer.postedAt - sent };
       toCommit.current = t;
-      setResult(answer.result);
+      setResult(result);
       setTiming(t);
       setError(null);
       setState("ready");
@@ -75,14 +77,18 @@ export function useWhatIf(input: ExposureInput, base: ExposureResult | null) {
     worker.current?.postMessage({ type: "compute", seq: id, edits: next } satisfies WorkerRequest);
   }, [input]);
 
+  // The same function from render to render (the emitter rows are memoised on it): the edits read from a ref.
+  const current = useRef(edits);
+  current.current = edits;
   const setEdit = useCallback(
     (id: string, edit: EmitterEdit | null) => {
-      const next = { ...edits };
+      const next = { ...current.current };
       if (edit && Object.values(edit).some((v) => v !== undefined && v !== false)) next[id] = edit;
       else delete next[id];
+      current.current = next;
       send(next);
     },
-    [edits, send],
+    [send],
   );
 
   // After React has committed a worker's answer (this hook's component commits after its children).
