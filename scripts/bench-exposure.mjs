@@ -84,6 +84,7 @@ for (let i = 0; i < Math.ceil(runs / 2); i++) {
   await page.waitForTimeout(150);
 }
 const timings = await page.evaluate(() => ({ all: window.__exposureTimings, split: window.__lastSwitch }));
+if (process.env.RAW === "1") for (const t of timings.all) console.log(JSON.stringify(Object.fromEntries(Object.entries(t).map(([k, v]) => [k, Math.round(v)]))));
 const weightOnly = timings.all.slice(0, timings.split);
 const geometry = timings.all.slice(timings.split);
 console.log(`what-if, off / power edits (re-weighted layers): worker compute ${stats(weightOnly.map((t) => t.computeMs))}`);
@@ -91,7 +92,8 @@ console.log(`                                      maps' geometry in the worker 
 console.log(`                                      edit → result in the page ${stats(weightOnly.map((t) => t.resultMs))}`);
 console.log(`                                      edit → next frame painted ${stats(weightOnly.filter((t) => t.paintedMs).map((t) => t.paintedMs))}`);
 // Where the time of an off/power edit goes, one phase after the other (medians; the worker's clock is aligned on the wall clock).
-const phase = (f) => stats(weightOnly.filter((t) => t.paintedMs && t.committedMs).map(f));
+const phased = weightOnly.filter((t) => t.paintedMs && t.committedMs && t.postedMs);
+const phase = (f) => (phased.length ? stats(phased.map(f)) : "(not recorded by this build)");
 console.log(`  phases: edit → worker starts               ${phase((t) => t.startedMs)}`);
 console.log(`          worker: compute + geometry         ${phase((t) => t.postedMs - t.startedMs)}`);
 console.log(`          answer posted → handled by the page ${phase((t) => t.resultMs - t.postedMs)}`);
