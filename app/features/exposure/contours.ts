@@ -58,7 +58,11 @@ export function contourShapes(g: GridGeometry, values: ArrayLike<number>, thresh
   const gen = contours().size([g.nx, g.ny]).smooth(true);
   // d3-contour reads values by index: a plain or typed array as it is, anything else copied once.
   const list = (Array.isArray(values) || values instanceof Float64Array ? values : Array.from(values)) as number[];
+  // A threshold above every value has no area (d3-contour would scan the grid to find none).
+  let max = -Infinity;
+  for (let c = 0; c < list.length; c++) if (list[c] > max) max = list[c];
   return thresholds.map((value) => {
+    if (value > max) return { value, rings: [] };
     const shape = gen.contour(list, value);
     const rings: Ring[] = [];
     for (const polygon of shape.coordinates) for (const ring of polygon) rings.push(ring.map((p) => toSite(g, p as [number, number])));
