@@ -5,6 +5,8 @@
 // nothing. Needs the built app and the seeded stack:
 //   BUILD_DIR=build-test npm run -s build && WITH_APP=1 npm run -s with-stack -- npm run -s bench:exposure -- [runs]
 // The machine's load average is printed first: on a shared machine the figures are that much slower.
+// SKIP_LOADER=1 leaves out the loader's figures, SKIP_SOLID=1 the 3D view's; RAW=1 prints each what-if
+// edit's phases (ms after the edit: worker started, answer posted, handled, committed, painted).
 import { execFileSync } from "node:child_process";
 import { cpus, loadavg } from "node:os";
 import { chromium } from "playwright-core";
