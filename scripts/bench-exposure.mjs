@@ -5,6 +5,8 @@
 // nothing. Needs the built app and the seeded stack:
 //   BUILD_DIR=build-test npm run -s build && WITH_APP=1 npm run -s with-stack -- npm run -s bench:exposure -- [runs]
 // The machine's load average is printed first: on a shared machine the figures are that much slower.
+// SKIP_LOADER=1 leaves out the loader's figures, SKIP_SOLID=1 the 3D view's; RAW=1 prints each what-if
+// edit's phases (ms after the edit: worker started, answer posted, handled, committed, painted).
 import { execFileSync } from "node:child_process";
 import { cpus, loadavg } from "node:os";
 import { chromium } from "playwright-core";
@@ -84,24 +86,33 @@ for (let i = 0; i < Math.ceil(runs / 2); i++) {
   await page.waitForTimeout(150);
 }
 const timings = await page.evaluate(() => ({ all: window.__exposureTimings, split: window.__lastSwitch }));
+if (process.env.RAW === "1") for (const t of timings.all) console.log(JSON.stringify(Object.fromEntries(Object.entries(t).map(([k, v]) => [k, Math.round(v)]))));
 const weightOnly = timings.all.slice(0, timings.split);
 const geometry = timings.all.slice(timings.split);
 console.log(`what-if, off / power edits (re-weighted layers): worker compute ${stats(weightOnly.map((t) => t.computeMs))}`);
 console.log(`                                      maps' geometry in the worker ${stats(weightOnly.map((t) => t.geometryMs ?? 0))}`);
 console.log(`                                      edit → result in the page ${stats(weightOnly.map((t) => t.resultMs))}`);
 console.log(`                                      edit → next frame painted ${stats(weightOnly.filter((t) => t.paintedMs).map((t) => t.paintedMs))}`);
+// Where the time of an off/power edit goes, one phase after the other (medians; the worker's clock is aligned on the wall clock).
+const phased = weightOnly.filter((t) => t.paintedMs && t.committedMs && t.postedMs);
+const phase = (f) => (phased.length ? stats(phased.map(f)) : "(not recorded by this build)");
+console.log(`  phases: edit → worker starts               ${phase((t) => t.startedMs)}`);
+console.log(`          worker: compute + geometry         ${phase((t) => t.postedMs - t.startedMs)}`);
+console.log(`          answer posted → handled by the page ${phase((t) => t.resultMs - t.postedMs)}`);
+console.log(`          handled → React committed          ${phase((t) => t.committedMs - t.resultMs)}`);
+console.log(`          committed → next frame painted     ${phase((t) => t.paintedMs - t.committedMs)}`);
 console.log(`what-if, tilt edits (one emitter re-evaluated):  worker compute ${stats(geometry.map((t) => t.computeMs))}`);
 console.log(`                                      edit → result in the page ${stats(geometry.map((t) => t.resultMs))}`);
 console.log(`                                      edit → next frame painted ${stats(geometry.filter((t) => t.paintedMs).map((t) => t.paintedMs))}`);
 
 // 3. The 3D view's first frame: from the page starting the worker (grid + marching cubes) and loading three.js to the first rendered frame.
 const first = [];
-for (let r = 0; r < Math.max(2, Math.ceil(runs / 3)); r++) {
+for (let r = 0; process.env.SKIP_SOLID !== "1" && r < Math.max(2, Math.ceil(runs / 3)); r++) {
   await page.goto(`${url}/solid`);
   await page.getByTestId("solid-summary").waitFor({ timeout: 120_000 });
   const [d] = await page.evaluate(() => performance.getEntriesByName("solid-first-frame").map((m) => m.detail));
   first.push(d.firstFrameMs);
 }
-console.log(`3D view, first frame after start (software WebGL):  ${stats(first)}`);
+if (first.length) console.log(`3D view, first frame after start (software WebGL):  ${stats(first)}`);
 console.log(`load average ${loadavg().map((l) => l.toFixed(1)).join(" / ")} at the end`);
 await browser.close();

@@ -46,4 +46,23 @@ for (const n of profile.nodes) {
 }
 console.log(`${edits} edits in ${wall} ms; main thread busy ${busy.toFixed(0)} ms (${(busy / edits).toFixed(1)} ms per edit)`);
 for (const [k, ms] of [...byName].sort((a, b) => b[1] - a[1]).slice(0, Number(process.env.TOP ?? 30))) console.log(`${(ms / edits).toFixed(2).padStart(7)} ms/edit  ${k}`);
+if (process.env.INCLUSIVE === "1") {
+  // Inclusive time (a function with everything it called), for React's components and the page's own functions.
+  const parent = new Map();
+  for (const n of profile.nodes) for (const c of n.children ?? []) parent.set(c, n.id);
+  const byId = new Map(profile.nodes.map((n) => [n.id, n]));
+  const total = new Map();
+  for (const [id, ms] of dt) {
+    const seen = new Set();
+    for (let x = id; x !== undefined; x = parent.get(x)) {
+      const f = byId.get(x).callFrame;
+      const key = `${f.functionName || "(anonymous)"} ${f.url.split("/").pop()}:${f.lineNumber}:${f.columnNumber}`;
+      if (seen.has(key)) continue;
+      seen.add(key);
+      total.set(key, (total.get(key) ?? 0) + ms);
+    }
+  }
+  console.log("inclusive:");
+  for (const [k, ms] of [...total].sort((a, b) => b[1] - a[1]).slice(0, Number(process.env.TOP ?? 30))) console.log(`${(ms / edits).toFixed(2).padStart(7)} ms/edit  ${k}`);
+}
 await browser.close();

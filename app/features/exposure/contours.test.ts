@@ -1,4 +1,5 @@
 // Contour assembly from d3-contour on a surface grid, in site metres.
+import { contours } from "d3-contour";
 import { describe, expect, it } from "vitest";
 import { classShapes, contourShapes, extendOutside, labelCandidates, ringLength, signedArea, toSite } from "./contours";
 
@@ -24,6 +25,12 @@ describe("contours", () => {
     // Area πr² within 2 %; the polygon's length within 5 % of 2πr (marching squares' segments wander by up to a cell).
     expect(Math.abs(signedArea(ring)) / (Math.PI * 25)).toBeCloseTo(1, 1);
     expect(Math.abs(ringLength(ring) / (2 * Math.PI * 5) - 1)).toBeLessThan(0.05);
+  });
+
+  it("gives no rings above the grid's highest value, as d3-contour does", () => {
+    const shapes = contourShapes(g, cone, [150, 200.001, 5000]);
+    expect(shapes.map((s) => s.rings.length)).toEqual([1, 0, 0]);
+    expect(contours().size([g.nx, g.ny]).smooth(true).contour(cone, 200.001).coordinates).toEqual([]);
   });
 
   it("offers label places evenly along a ring", () => {

@@ -58,7 +58,11 @@ export function contourShapes(g: GridGeometry, values: ArrayLike<number>, thresh
   const gen = contours().size([g.nx, g.ny]).smooth(true);
   // d3-contour reads values by index: a plain or typed array as it is, anything else copied once.
   const list = (Array.isArray(values) || values instanceof Float64Array ? values : Array.from(values)) as number[];
+  // A threshold above every value has no area (d3-contour would scan the grid to find none).
+  let max = -Infinity;
+  for (let c = 0; c < list.length; c++) if (list[c] > max) max = list[c];
   return thresholds.map((value) => {
+    if (value > max) return { value, rings: [] };
     const shape = gen.contour(list, value);
     const rings: Ring[] = [];
     for (const polygon of shape.coordinates) for (const ring of polygon) rings.push(ring.map((p) => toSite(g, p as [number, number])));
@@ -104,7 +108,9 @@ export function signedArea(ring: Ring): number {
 
 /** The areas of class ≥ 1, ≥ 2 and ≥ 3 as shapes (outside cells count as class 0). */
 export function classShapes(g: GridGeometry, classes: ArrayLike<number>): ContourShape[] {
-  const values = Float64Array.from(classes as ArrayLike<number>, (c) => (c === 255 ? 0 : c));
+  // A loop, not Float64Array.from(…, map): the mapping form is several times slower on a large grid.
+  const values = new Float64Array(classes.length);
+  for (let c = 0; c < values.length; c++) values[c] = classes[c] === 255 ? 0 : classes[c];
   // Thresholds half-way between classes, so the outline runs between cells of different classes.
   return contourShapes(g, values, [0.5, 1.5, 2.5]).map((s, k) => ({ value: k + 1, rings: s.rings }));
 }

@@ -1,9 +1,10 @@
 // The emitters: figures, compliance distances for both tiers, the pattern as polar diagrams, and
 // the what-if controls (on/off, power in dB or %, azimuth, total downtilt). Edits are not saved.
-import { useEffect, useState } from "react";
+// Each row is memoised on what it shows, so an edit redraws the edited emitter's row, not all of them.
+import { memo, useEffect, useMemo, useState } from "react";
 import type { EnginePattern } from "~/infra/db/schema/emitters";
-import type { InventoryEmitter } from "./engine-inputs";
-import type { ExposureResult } from "./exposure-result";
+import { emitterPattern, type InventoryEmitter } from "./engine-inputs";
+import type { EmitterView, ExposureResult } from "./exposure-result";
 import { tierLabels, type ExposureOptions } from "./options";
 import { PolarDiagrams } from "./polar-diagram";
 import { Table, td, th } from "./exposure-tables";
@@ -24,7 +25,12 @@ const small = "w-20 rounded-control border border-rule-strong bg-sheet px-2 py-1
 
 export function EmitterWhatIfTable({ result, stored, info, patterns, options, edits, onEdit }: Props) {
   const views = new Map(result.emitters.map((e) => [e.inventoryId, e]));
-  const library = new Map(patterns);
+  // The pattern drawn on each row, from the stored inventory (a what-if never changes a pattern, and a
+  // result's own patterns arrive as new, equal objects): the same object from render to render.
+  const drawn = useMemo(() => {
+    const library = new Map(patterns);
+    return new Map(stored.map((s) => [s.id, emitterPattern(s, library)]));
+  }, [stored, patterns]);
   const tiers = tierLabels[options.standard];
   return (
     <Table
@@ -46,29 +52,39 @@ export function EmitterWhatIfTable({ result, stored, info, patterns, options, ed
         </tr>
       }
     >
-      {stored.map((s) => {
-        const v = views.get(s.id);
-        const edit = edits[s.id] ?? {};
-        const meta = info[s.id];
-        return (
-          <tr key={s.id} data-emitter-row={s.label} className={edits[s.id] ? "bg-paper" : undefined}>
-            <th scope="row" className={`${td} text-left font-medium`}>
-              {s.label}
-              <span className="block text-xs font-normal text-graphite-600">{[meta?.operator, meta?.band].filter(Boolean).join(" · ")}</span>
-              {!s.active ? <span className="block text-xs font-normal text-graphite-600">inactive in the inventory: left out</span> : null}
-            </th>
-            <td className={num}>{s.frequencyMHz}</td>
-            <td className={num}>{v?.eirpW != null ? Number(v.eirpW.toPrecision(4)) : "–"}</td>
-            <td className={num}>{v?.complianceDistanceM ? v.complianceDistanceM.general.toFixed(2) : "–"}</td>
-            <td className={num}>{v?.complianceDistanceM ? v.complianceDistanceM.occupational.toFixed(2) : "–"}</td>
-            <td className={td}>{v ? <PolarDiagrams pattern={"own" in v.pattern ? v.pattern.own : library.get(v.pattern.libraryId)!} azimuthDeg={v.azimuthDeg} tiltDeg={v.tiltDeg} label={s.label} /> : null}</td>
-            <td className={td}>{s.active ? <EditControls emitter={s} edit={edit} onEdit={(e) => onEdit(s.id, e)} /> : null}</td>
-          </tr>
-        );
-      })}
+      {stored.map((s) => (
+        <EmitterRow key={s.id} emitter={s} view={views.get(s.id)} edit={edits[s.id]} meta={info[s.id]} pattern={drawn.get(s.id)!} onEdit={onEdit} />
+      ))}
     </Table>
   );
 }
+
+type RowProps = { emitter: InventoryEmitter; view: EmitterView | undefined; edit: EmitterEdit | undefined; meta: { operator: string; band: string } | undefined; pattern: EnginePattern; onEdit: Props["onEdit"] };
+
+/** The figures a row shows of its emitter's view: a new result redraws only the rows whose figures changed (an edit changes one emitter). */
+const shown = (v: EmitterView | undefined) => (v ? [v.eirpW, v.complianceDistanceM?.general, v.complianceDistanceM?.occupational, v.azimuthDeg, v.tiltDeg] : null);
+const sameRow = (a: RowProps, b: RowProps) =>
+  a.emitter === b.emitter && a.edit === b.edit && a.meta === b.meta && a.pattern === b.pattern && a.onEdit === b.onEdit && JSON.stringify(shown(a.view)) === JSON.stringify(shown(b.view));
+
+const EmitterRow = memo(function EmitterRow({ emitter: s, view: v, edit, meta, pattern, onEdit }: RowProps) {
+  return (
+    <tr data-emitter-row={s.label} className={edit ? "bg-paper" : undefined}>
+      <th scope="row" className={`${td} text-left font-medium`}>
+        {s.label}
+        <span className="block text-xs font-normal text-graphite-600">{[meta?.operator, meta?.band].filter(Boolean).join(" · ")}</span>
+        {!s.active ? <span className="block text-xs font-normal text-graphite-600">inactive in the inventory: left out</span> : null}
+      </th>
+      <td className={num}>{s.frequencyMHz}</td>
+      <td className={num}>{v?.eirpW != null ? Number(v.eirpW.toPrecision(4)) : "–"}</td>
+      <td className={num}>{v?.complianceDistanceM ? v.complianceDistanceM.general.toFixed(2) : "–"}</td>
+      <td className={num}>{v?.complianceDistanceM ? v.complianceDistanceM.occupational.toFixed(2) : "–"}</td>
+      <td className={td}>{v ? <PolarDiagrams pattern={pattern} azimuthDeg={v.azimuthDeg} tiltDeg={v.tiltDeg} label={s.label} /> : null}</td>
+      <td className={td}>{s.active ? <EditControls emitter={s} edit={edit ?? NO_EDIT} onEdit={(e) => onEdit(s.id, e)} /> : null}</td>
+    </tr>
+  );
+}, sameRow);
+
+const NO_EDIT: EmitterEdit = {};
 
 function EditControls({ emitter, edit, onEdit }: { emitter: InventoryEmitter; edit: EmitterEdit; onEdit: (edit: EmitterEdit | null) => void }) {
   const [unit, setUnit] = useState<"dB" | "%">("dB");

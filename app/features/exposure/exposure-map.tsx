@@ -8,7 +8,7 @@ import { SitePlan } from "~/features/layout/site-plan";
 import type { PlanFrame, XY } from "~/features/layout/plan-frame";
 import { formatPercent } from "./colour-scale";
 import { labelCandidates, ringLength, type Ring } from "./contours";
-import { geometryOf, type SurfaceGeometry } from "./map-geometry";
+import { geometryOf, ringsPath, type SurfaceGeometry } from "./map-geometry";
 import { around, overlapArea, placeLabels, segmentBoxes, textWidth, type Box, type PlacedLabel } from "./map-labels";
 import type { AreaView, EmitterView, ExposureResult } from "./exposure-result";
 import type { ExposureOptions } from "./options";
@@ -35,7 +35,7 @@ const NONE: never[] = [];
 
 /** Things standing on this level: within half a metre of its elevation. */
 const onLevel = (z: number, level: number) => Math.abs(z - level) <= 0.5;
-const pathOf = (frame: PlanFrame, rings: Ring[]) => rings.map((r) => r.map((p, i) => `${i ? "L" : "M"}${frame.toPx(p[0], p[1]).map((v) => v.toFixed(1)).join(" ")}`).join("") + "Z").join("");
+const pathOf = (frame: PlanFrame, rings: Ring[]) => ringsPath(rings, frame.toPx);
 
 /** Memoised: a render of the page that keeps the same result (an edit before its answer, the pending flag) skips the map. */
 export const ExposureLevelMap = memo(function ExposureLevelMap({ title, engineEmitters, elevationM, areas, result, options, obstructions, accessPoints, width = 960 }: Props) {

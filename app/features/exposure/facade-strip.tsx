@@ -1,10 +1,10 @@
 // A facade as an elevation strip: distance along the facade (from its first end) across, height
 // up, on the map's colour scale, with the 100 % line, the class outlines and the worst point.
 import { memo } from "react";
-import { formatPercent, SCALE_MIN_PERCENT } from "./colour-scale";
-import { classShapes, contourShapes, type Ring } from "./contours";
+import { formatPercent } from "./colour-scale";
+import type { Ring } from "./contours";
 import type { FacadeView } from "./exposure-result";
-import { fieldImage } from "./field-image";
+import { facadeGeometryOf, ringsPath } from "./map-geometry";
 
 const PAD = { left: 44, right: 12, top: 24, bottom: 30 };
 
@@ -14,7 +14,6 @@ export const FacadeStrip = memo(function FacadeStrip({ facade, width = 960 }: { 
   const length = along[along.length - 1] ?? 0;
   const bottom = heights[0] ?? 0;
   const top = heights[heights.length - 1] ?? bottom;
-  const step = along.length > 1 ? along[1] - along[0] : 1;
   const span = Math.max(length, 1);
   const scale = Math.min((width - PAD.left - PAD.right) / span, 360 / Math.max(top - bottom, 1));
   const w = span * scale;
@@ -22,13 +21,10 @@ export const FacadeStrip = memo(function FacadeStrip({ facade, width = 960 }: { 
   const shift = Math.max(0, (width - PAD.left - PAD.right - w) / 2);
   const h = Math.max(top - bottom, 0.5) * scale;
   const toPx = (s: number, z: number): [number, number] => [shift + PAD.left + s * scale, PAD.top + (top - z) * scale];
-  const g = { nx: along.length, ny: heights.length, x0: 0, y0: bottom, step };
-  const pathOf = (rings: Ring[]) => rings.map((r) => r.map((p, i) => `${i ? "L" : "M"}${toPx(p[0], p[1]).map((v) => v.toFixed(1)).join(" ")}`).join("") + "Z").join("");
-  const field = fieldImage(g, facade.percent);
+  const pathOf = (rings: Ring[]) => ringsPath(rings, toPx);
+  // Built in the what-if worker beside each result (map-geometry.ts), else here and kept.
+  const { field, floor, hundred, classes } = facadeGeometryOf(facade);
   const [fx, fy] = toPx(field.x, field.y + field.height);
-  const [floor] = contourShapes(g, facade.percent, [SCALE_MIN_PERCENT]);
-  const [hundred] = contourShapes(g, facade.percent, [100]);
-  const classes = classShapes(g, facade.classes);
   const ticks = (lo: number, hi: number) => {
     const every = hi - lo > 30 ? 10 : hi - lo > 10 ? 5 : 1;
     const out: number[] = [];

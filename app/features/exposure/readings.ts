@@ -66,7 +66,7 @@ export function readingsRequest(readings: SiteReading[], surfaces: LayoutSurface
 }
 
 /** Each reading beside its prediction; `predicted` is the response to `readingsRequest` (null: no emitters, everything predicts 0). */
-export function compareReadings(readings: SiteReading[], surfaces: LayoutSurface[], predicted: EvaluationResponse | null, o: ExposureOptions): { rows: ReadingComparison[]; summary: ReadingsSummary } {
+export function compareReadings(readings: SiteReading[], surfaces: LayoutSurface[], predicted: Pick<EvaluationResponse, "points"> | null, o: ExposureOptions): { rows: ReadingComparison[]; summary: ReadingsSummary } {
   const points = readingPoints(readings, surfaces);
   const rows = readings.map((r, i): ReadingComparison => {
     const p = predicted?.points?.[i];

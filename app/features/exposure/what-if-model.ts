@@ -8,11 +8,13 @@
 // (not linear) every edit re-runs the whole site through `computeExposure`. Pure: the Web Worker
 // holds one model per page.
 import { evaluate, powerDensityLimitWm2, type EmitterInput } from "~/engine";
+import { createEmitterMemo, type EmitterMemo } from "./emitter-memo";
 import { engineEmitters } from "./engine-inputs";
 import type { Areas, Contribution, EmitterSummary } from "./evaluate-site";
-import { computeExposure, emitterViewsOf, lean, readingsOf, type AreaView, type ExposureInput, type ExposureResult, type FacadeView } from "./exposure-result";
-import { otherTier, type ExposureOptions } from "./options";
-import { areaRequest, facadeAxes, facadeRequest, otherTierDistancesRequest } from "./requests";
+import { computeExposure, emitterViewsOf, lean, type AreaView, type ExposureInput, type ExposureResult, type FacadeView } from "./exposure-result";
+import { otherTier } from "./options";
+import { compareReadings } from "./readings";
+import { areaRequest, facadeAxes, facadeRequest } from "./requests";
 import { applyWhatIf, cleanEdits, type WhatIfEdits } from "./what-if";
 
 type Layer = { key: string; percent: Float64Array };
@@ -40,6 +42,7 @@ export function createWhatIfModel(input: ExposureInput, baseIn?: ExposureResult)
   }));
   const layers = new Map<string, Layer[]>(); // inventory id → one layer per area surface, then one per facade
   const ratio = new Map<string, number>(); // inventory id → this tier's % to the other tier's %
+  const memo = createEmitterMemo(o, input.readings, input.surfaces); // distances and readings, per emitter
 
   function layersFor(id: string, emitter: EmitterInput): Layer[] {
     const key = JSON.stringify([emitter.azimuthDeg, emitter.tiltDeg]);
@@ -88,11 +91,11 @@ export function createWhatIfModel(input: ExposureInput, baseIn?: ExposureResult)
       const facades = base.facades.map((f, k) => facadeView(f, facadePoints[k], facadeAxes(facadeSurfaces[k], o).step ** 2, live.map((w) => ({ ...w, layer: w.layers[bases.length + k].percent })), o.tier));
       let worst: AreaView | FacadeView | null = null;
       for (const a of [...areas, ...facades]) if (a.worstAt && (!worst || a.worstPercent > worst.worstPercent)) worst = a;
-      const compared = readingsOf(input, engineList);
+      const compared = compareReadings(input.readings, input.surfaces, memo.readings(engineList), o);
       return {
         areas,
         facades,
-        emitters: emitterViewsOf(applied, summaries(engineList, inventoryIdOf, o), patterns),
+        emitters: emitterViewsOf(applied, summaries(engineList, inventoryIdOf, memo), patterns),
         summary: { worstPercent: worst?.worstPercent ?? 0, worstAt: worst?.worstAt ? { ...worst.worstAt, surfaceId: worst.surfaceId, surfaceName: worst.name } : null },
         readings: compared.rows,
         readingsSummary: compared.summary,
@@ -104,19 +107,16 @@ export function createWhatIfModel(input: ExposureInput, baseIn?: ExposureResult)
 
 type Weighted = { engineId: string; weight: number; ratio: number; layer: Float64Array };
 
-/** Compliance distances for both tiers and the EIRP, as evaluateSite gets them (one point-less run per tier). */
-function summaries(engineList: EmitterInput[], inventoryIdOf: Map<string, string>, o: ExposureOptions): EmitterSummary[] {
-  if (!engineList.length) return [];
-  const [mine, other] = [o.tier, otherTier(o.tier)].map((tier) => evaluate({ ...otherTierDistancesRequest(engineList, o), tier }));
-  const byTier = { [o.tier]: mine, [otherTier(o.tier)]: other } as Record<"general" | "occupational", typeof mine>;
-  return other.emitters.map((e, i) => ({
-    id: e.id,
-    label: e.id,
-    inventoryId: inventoryIdOf.get(e.id)!,
-    eirpW: e.eirpW,
-    erpW: e.erpW,
+/** Compliance distances for both tiers and the EIRP, as evaluateSite gets them (kept per emitter: emitter-memo.ts). */
+function summaries(engineList: EmitterInput[], inventoryIdOf: Map<string, string>, memo: EmitterMemo): EmitterSummary[] {
+  return memo.figures(engineList).map((f, i) => ({
+    id: engineList[i].id,
+    label: engineList[i].id,
+    inventoryId: inventoryIdOf.get(engineList[i].id)!,
+    eirpW: f.eirpW,
+    erpW: f.erpW,
     frequencyMHz: engineList[i].frequencyMHz,
-    complianceDistanceM: { general: byTier.general.emitters[i].complianceDistanceM, occupational: byTier.occupational.emitters[i].complianceDistanceM },
+    complianceDistanceM: { general: f.general, occupational: f.occupational },
   }));
 }
 
@@ -166,18 +166,22 @@ function areaView(b: AreaBase, shape: AreaView, ws: Weighted[], tier: "general" 
     }
   }
   const [gen, occ] = tier === "general" ? [total, other] : [other, total];
-  const classes = new Array<number>(n);
+  // Plain arrays filled in order (packed, not holey: several times quicker to fill and to post).
+  const classes: number[] = [];
+  const percent: number[] = [];
   const counts = [0, 0, 0, 0];
   let max = -1;
   let at = -1;
   for (let c = 0; c < n; c++) {
     if (!b.inside[c]) {
-      classes[c] = 255;
+      classes.push(255);
+      percent.push(0);
       continue;
     }
     // 47 CFR §1.1307(b)(2)/(b)(4) classes against the standard's two limits, as evaluateSite.
     const k = occ[c] > 1000 ? 3 : occ[c] > 100 ? 2 : gen[c] > 100 ? 1 : 0;
-    classes[c] = k;
+    classes.push(k);
+    percent.push(lean(total[c]));
     counts[k]++;
     if (total[c] > max) {
       max = total[c];
@@ -195,7 +199,7 @@ function areaView(b: AreaBase, shape: AreaView, ws: Weighted[], tier: "general" 
   const round6 = (v: number) => Math.round(v * 1e6) / 1e6;
   return {
     ...shape,
-    percent: Array.from(total, (p, c) => (b.inside[c] ? lean(p) : 0)),
+    percent,
     classes,
     worstPercent: Math.max(0, round6(max)),
     worstAt: at < 0 ? null : { x: round6(b.x0 + (at % b.nx) * b.step), y: round6(b.y0 + Math.floor(at / b.nx) * b.step), z: b.elevationM },
