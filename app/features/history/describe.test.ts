@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { changeRows, describeAction, showValue } from "./describe";
+import { changeRows, describeAction, recordLabel, showValue } from "./describe";
 
 describe("history in words", () => {
   it("names the action and the record", () => {
@@ -28,6 +28,26 @@ describe("history in words", () => {
       { field: "Name", before: "", after: "Tower" },
       { field: "Client", before: "", after: "Larch & Co" },
       { field: "Pattern", before: "", after: "a removed record" },
+    ]);
+  });
+
+  it("shows a document's step as a change of state only, named by its kind and version", () => {
+    // The document commands record { state } before and { kind, version, state } after.
+    const before = { state: "in_review" };
+    const after = { kind: "report", state: "issued", version: 2 };
+    expect(changeRows(before, after)).toEqual([{ field: "State", before: "in review", after: "issued" }]);
+    expect(recordLabel(after)).toBe("report v2");
+    expect(recordLabel({ kind: "letter", version: 1 })).toBe("landlord letter v1");
+    expect(recordLabel({ name: "Tower", kind: "rooftop", version: 3 })).toBe("Tower");
+  });
+
+  it("words an assessment's options and hides other records' ids", () => {
+    const rows = changeRows(null, { standard: "fcc", tier: "general", heights: { toM: 2, count: 11, fromM: 0 }, gridStepM: 0.5, assessmentId: "30ef3867-6f79-4644-93e0-6a9f2db31ebc", replaces: "3ce2ea1a" });
+    expect(rows).toEqual([
+      { field: "Standard", before: "", after: "FCC 47 CFR §1.1310" },
+      { field: "Tier", before: "", after: "general public / uncontrolled" },
+      { field: "Heights above each surface", before: "", after: "0–2 m, 11 heights" },
+      { field: "Grid step (m)", before: "", after: "0.5" },
     ]);
   });
 });
