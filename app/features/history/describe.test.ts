@@ -50,4 +50,19 @@ describe("history in words", () => {
       { field: "Grid step (m)", before: "", after: "0.5" },
     ]);
   });
+
+  it("shows billing amounts as money, not as cents", () => {
+    // payment.received and payment.refunded events (payment-events.server.ts, refunds.server.ts).
+    expect(changeRows(null, { amount: 60000, currency: "eur", purpose: "invoice", invoiceId: "b061be14" })).toEqual([
+      { field: "Amount", before: "", after: "€600.00" },
+      { field: "Currency", before: "", after: "EUR" },
+      { field: "For", before: "", after: "invoice" },
+    ]);
+    expect(changeRows({ amountRefunded: 0, currency: "gbp" }, { amountRefunded: 30000, refund: 30000, currency: "gbp" })).toEqual([
+      { field: "Refunded in all", before: "£0.00", after: "£300.00" },
+      { field: "Refunded now", before: "—", after: "£300.00" },
+    ]);
+    // An older event without its currency still reads as an amount, not as 30000.
+    expect(changeRows({ amountRefunded: 0 }, { amountRefunded: 30000, reason: "" })).toEqual([{ field: "Refunded in all", before: "0.00", after: "300.00" }]);
+  });
 });

@@ -1,4 +1,5 @@
 // History in words: what an audit event's action means, and which fields changed from what to what.
+import { decimalOf, formatMoney } from "~/features/billing/money";
 import { standardLabels, tierLabels } from "~/features/visits/standards";
 
 const entityNames: Record<string, string> = {
@@ -128,7 +129,19 @@ const fieldLabels: Record<string, string> = {
   worstPercent: "Worst point (% of limit)",
   authority: "Authority",
   note: "Note",
+  amount: "Amount",
+  amountRefunded: "Refunded in all",
+  refund: "Refunded now",
+  total: "Total",
+  currency: "Currency",
+  number: "Invoice number",
+  lines: "Lines",
+  purpose: "For",
+  event: "Payment-service event",
 };
+
+/** Billing fields held in integer minor units (cents), shown as money. */
+const moneyFields = new Set(["amount", "amountRefunded", "refund", "total"]);
 
 export function fieldLabel(key: string) {
   return fieldLabels[key] ?? key.replace(/([a-z])([A-Z])/g, "$1 $2").replace(/^./, (c) => c.toUpperCase());
@@ -138,8 +151,10 @@ const unitNames: Record<string, string> = { "W/m2": "W/m²", "mW/cm2": "mW/cm²"
 
 const stateWords: Record<string, string> = { in_review: "in review" };
 
-/** Values whose meaning depends on the field: standards and tiers by name, a height span in words. */
-function showFieldValue(key: string, value: unknown): string | null {
+/** Values whose meaning depends on the field: standards and tiers by name, a height span in words, money from cents. */
+function showFieldValue(key: string, value: unknown, currency: string | null = null): string | null {
+  if (moneyFields.has(key) && typeof value === "number" && Number.isInteger(value)) return currency ? formatMoney(value, currency) : decimalOf(value);
+  if (key === "currency" && typeof value === "string") return value.toUpperCase();
   if ((key === "standard" || key === "percentStandard") && typeof value === "string") return standardLabels[value as keyof typeof standardLabels] ?? value;
   if ((key === "tier" || key === "percentTier") && typeof value === "string") return tierLabels[value as keyof typeof tierLabels] ?? value;
   if (key === "state" && typeof value === "string") return stateWords[value] ?? value;
@@ -183,9 +198,11 @@ export function changeRows(before: Record<string, unknown> | null, after: Record
     // Other records' ids (assessmentId, paymentId, …) other than the ones named from `names`.
     .filter((k) => referenceFields.has(k) || !/Id$/.test(k))
     .filter((k) => !(before && after && identityFields.has(k) && !(k in before)));
+  const currency = [after?.currency, before?.currency].find((c): c is string => typeof c === "string" && /^[a-z]{3}$/i.test(c)) ?? null;
   const show = (k: string, value: unknown) =>
-    referenceFields.has(k) && typeof value === "string" ? (names[value] ?? "a removed record") : (showFieldValue(k, value) ?? showValue(value));
+    referenceFields.has(k) && typeof value === "string" ? (names[value] ?? "a removed record") : (showFieldValue(k, value, currency) ?? showValue(value));
   return keys
-    .filter((k) => JSON.stringify(before?.[k] ?? null) !== JSON.stringify(after?.[k] ?? null))
+    // An empty text and a missing field both read "—": no change between them.
+    .filter((k) => JSON.stringify(before?.[k] === "" ? null : (before?.[k] ?? null)) !== JSON.stringify(after?.[k] === "" ? null : (after?.[k] ?? null)))
     .map((k) => ({ field: fieldLabel(k), before: before ? show(k, before[k]) : "", after: after ? show(k, after[k]) : "" }));
 }
