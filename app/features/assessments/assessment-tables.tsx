@@ -27,9 +27,9 @@ export function AssessmentTables({ view }: { view: Pick<AssessmentView, "surface
                   <td className={`${td} figures whitespace-nowrap`}>{s.worstAt ? `${s.worstAt.x}, ${s.worstAt.y}, ${s.worstAt.z}` : "—"}</td>
                   <td className={td}>
                     {s.contributions.length
-                      ? s.contributions.map((c, i) => (
-                          <span key={c.id} className="whitespace-nowrap">
-                            {c.id} {figure3(c.percent)} %{i < s.contributions.length - 1 ? "; " : ""}{" "}
+                      ? s.contributions.map((c) => (
+                          <span key={c.id} className="block whitespace-nowrap">
+                            {c.id} {figure3(c.percent)} %
                           </span>
                         ))
                       : "—"}

@@ -3,6 +3,7 @@
 // layers on top through `children(frame)` (emitters, readings, exposure) in site metres via
 // frame.toPx. Clicks report site coordinates, so a polygon can be drawn on the plan.
 import { useEffect, useId, useMemo, useRef, useState, type MouseEvent, type ReactNode } from "react";
+import { areaLabelBox, areaLabelSpot, type Rect } from "./label-spot";
 import { backdropCorners, boundsOf, makeFrame, scaleBarMetres, type Bounds, type PlanFrame, type XY } from "./plan-frame";
 
 export type PlanSurface = { id: string; name: string; kind: "area" | "facade"; polygon?: XY[] | null; line?: [XY, XY] | null; elevationM?: number | null; bottomM?: number | null; topM?: number | null; access: "public" | "workers" | "none" };
@@ -79,6 +80,33 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
     return makeFrame(fixedBounds ?? boundsOf(points), { width: planWidth });
   }, [surfaces, obstructions, accessPoints, extraPoints, draft, planWidth, backdrop, fixedBounds]);
 
+  // Area names go where the emitters, access points and other names leave room (label-spot.ts).
+  const areaLabelSpots = useMemo(() => {
+    const taken: Rect[] = [];
+    for (const [x, y] of extraPoints) {
+      const [px, py] = frame.toPx(x, y);
+      taken.push({ x0: px - 12, y0: py - 12, x1: px + 12, y1: py + 12 });
+    }
+    for (const a of accessPoints) {
+      const [px, py] = frame.toPx(a.x, a.y);
+      taken.push({ x0: px - 7, y0: py - 7, x1: px + 11 + a.name.length * 5.6, y1: py + 7 });
+    }
+    for (const o of obstructions) {
+      if (o.polygon.length < 3) continue;
+      const [px, py] = frame.toPx(...centroid(o.polygon));
+      const half = (o.name.length + 8) * 2.9;
+      taken.push({ x0: px - half, y0: py - 9, x1: px + half, y1: py + 3 });
+    }
+    const spots = new Map<string, XY>();
+    for (const s of surfaces) {
+      if (s.kind !== "area" || !s.polygon || s.polygon.length < 3) continue;
+      const spot = areaLabelSpot(s.polygon.map((p) => frame.toPx(...p)), s.name, taken);
+      spots.set(s.id, spot);
+      taken.push(areaLabelBox(spot, s.name));
+    }
+    return spots;
+  }, [frame, surfaces, obstructions, accessPoints, extraPoints]);
+
   const toSiteFromEvent = (event: MouseEvent<SVGSVGElement>): XY | null => {
     const svg = svgRef.current;
     const matrix = svg?.getScreenCTM();
@@ -144,7 +172,7 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
         s.kind === "area" && s.polygon && s.polygon.length >= 3 ? (
           <g key={s.id}>
             <path d={path(s.polygon)} fill={fills[s.access]} fillOpacity={backdrop ? 0.6 : 1} className={s.id === highlightId ? "stroke-ink-900" : "stroke-graphite-600"} strokeWidth={s.id === highlightId ? 2.5 : 1.25} />
-            <AreaLabel frame={frame} surface={s} />
+            <AreaLabel frame={frame} surface={s} at={areaLabelSpots.get(s.id)} />
           </g>
         ) : s.kind === "facade" && s.line ? (
           <g key={s.id}>
@@ -207,9 +235,9 @@ function labelAt(frame: PlanFrame, x: number, y: number) {
   return { x: px, y: py };
 }
 
-function AreaLabel({ frame, surface }: { frame: PlanFrame; surface: PlanSurface }) {
+function AreaLabel({ frame, surface, at }: { frame: PlanFrame; surface: PlanSurface; at?: XY }) {
   const [cx, cy] = centroid(surface.polygon ?? []);
-  const { x, y } = labelAt(frame, cx, cy);
+  const { x, y } = at ? { x: at[0], y: at[1] } : labelAt(frame, cx, cy);
   const elevation = surface.elevationM ?? 0;
   return (
     <text x={x} y={y} textAnchor="middle" className={`pointer-events-none fill-ink-900 text-[11px] ${halo.className}`} strokeWidth={halo.strokeWidth}>
