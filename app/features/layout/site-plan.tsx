@@ -170,10 +170,7 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
       </g>
       {surfaces.map((s) =>
         s.kind === "area" && s.polygon && s.polygon.length >= 3 ? (
-          <g key={s.id}>
-            <path d={path(s.polygon)} fill={fills[s.access]} fillOpacity={backdrop ? 0.6 : 1} className={s.id === highlightId ? "stroke-ink-900" : "stroke-graphite-600"} strokeWidth={s.id === highlightId ? 2.5 : 1.25} />
-            <AreaLabel frame={frame} surface={s} at={areaLabelSpots.get(s.id)} />
-          </g>
+          <path key={s.id} d={path(s.polygon)} fill={fills[s.access]} fillOpacity={backdrop ? 0.6 : 1} className={s.id === highlightId ? "stroke-ink-900" : "stroke-graphite-600"} strokeWidth={s.id === highlightId ? 2.5 : 1.25} />
         ) : s.kind === "facade" && s.line ? (
           <g key={s.id}>
             <path d={path(s.line, false)} className={s.id === highlightId ? "stroke-ink-900" : "stroke-ink-700"} strokeWidth={5} strokeLinecap="butt" />
@@ -191,6 +188,8 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
           </g>
         ) : null,
       )}
+      {/* Every area's name over every area's and obstruction's fill, so a lower level drawn later does not hide a higher one's name. */}
+      {surfaces.map((s) => (s.kind === "area" && s.polygon && s.polygon.length >= 3 ? <AreaLabel key={s.id} frame={frame} surface={s} at={areaLabelSpots.get(s.id)} /> : null))}
       {accessPoints.map((a) => {
         const [px, py] = frame.toPx(a.x, a.y);
         return (
