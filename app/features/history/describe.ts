@@ -76,6 +76,9 @@ const fieldLabels: Record<string, string> = {
   x: "x (m)",
   y: "y (m)",
   z: "z (m)",
+  "position.x": "x (m)",
+  "position.y": "y (m)",
+  "position.z": "z (m)",
   model: "Model",
   apertureM: "Aperture height (m)",
   dishDiameterM: "Dish diameter (m)",
@@ -165,6 +168,11 @@ function showFieldValue(key: string, value: unknown, currency: string | null = n
     }
   }
   return null;
+}
+
+/** A field's value as people read it: `showValue` with the field's own wording (standards, states, money, height spans). */
+export function showField(key: string, value: unknown, currency: string | null = null): string {
+  return showFieldValue(key, value, currency) ?? showValue(value);
 }
 
 /** A value as a short readable text: numbers as they are, lists and outlines summarised. */
