@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { areaLabelBox, areaLabelSpot, rectDistance, type Rect } from "./label-spot";
+import { areaLabelBox, areaLabelSpot, lineLabelBox, rectDistance, type Rect } from "./label-spot";
 import type { XY } from "./plan-frame";
 
 // Label placement on the plan: common practice, no source.
@@ -29,8 +29,12 @@ describe("where an area's name goes", () => {
     expect(rectDistance(box, other)).toBeGreaterThan(0);
   });
 
-  it("stays in the middle of an area too small to move the label within", () => {
-    const tiny: XY[] = [[0, 0], [30, 0], [30, 20], [0, 20]];
-    expect(areaLabelSpot(tiny, "Landing", [{ x0: 10, y0: 5, x1: 20, y1: 15 }])).toEqual([15, 10]);
+  it("lets a small outline's name overhang it rather than sit on an access point's name", () => {
+    const housing: XY[] = [[0, 0], [40, 0], [40, 40], [0, 40]];
+    const door: Rect = { x0: 30, y0: 15, x1: 110, y1: 29 };
+    const spot = areaLabelSpot(housing, "Stair housing · 2.6 m", [door], 8, lineLabelBox);
+    expect(rectDistance(lineLabelBox(spot, "Stair housing · 2.6 m"), door)).toBeGreaterThan(0);
+    expect(spot[0]).toBeGreaterThan(0);
+    expect(spot[1]).toBeLessThan(40);
   });
 });

@@ -13,6 +13,12 @@ export function areaLabelBox([x, y]: XY, name: string): Rect {
   return { x0: x - half, y0: y - 11, x1: x + half, y1: y + 16 };
 }
 
+/** The box of an obstruction's one-line label ("Lift motor room · 3 m", 10 px) around its anchor. */
+export function lineLabelBox([x, y]: XY, text: string): Rect {
+  const half = Math.max(12, text.length * 2.9);
+  return { x0: x - half, y0: y - 9, x1: x + half, y1: y + 3 };
+}
+
 export function rectDistance(a: Rect, b: Rect) {
   const dx = Math.max(0, a.x0 - b.x1, b.x0 - a.x1);
   const dy = Math.max(0, a.y0 - b.y1, b.y0 - a.y1);
@@ -37,13 +43,14 @@ function vertexMean(points: readonly XY[]): XY {
 /**
  * The anchor of an area's label, in pixels. `polygon` is the area in pixels; `obstacles` are what is
  * drawn already. The middle wins when it is `clearance` px clear of every obstacle; otherwise the
- * candidate on a 9 × 9 grid whose label box lies inside the area and is furthest from the obstacles
- * (up to twice the clearance, then the nearest to the middle).
+ * candidate on a 9 × 9 grid whose label box lies inside the area (or, failing a clear one, whose
+ * anchor does) and is furthest from the obstacles (up to twice the clearance, then the nearest to
+ * the middle).
  */
-export function areaLabelSpot(polygon: readonly XY[], name: string, obstacles: readonly Rect[], clearance = 12): XY {
+export function areaLabelSpot(polygon: readonly XY[], name: string, obstacles: readonly Rect[], clearance = 12, boxOf: (at: XY, text: string) => Rect = areaLabelBox): XY {
   const middle = vertexMean(polygon);
   const room = (p: XY) => {
-    const box = areaLabelBox(p, name);
+    const box = boxOf(p, name);
     return obstacles.reduce((least, o) => Math.min(least, rectDistance(box, o)), Infinity);
   };
   if (polygon.length < 3 || room(middle) >= clearance) return middle;
@@ -53,20 +60,25 @@ export function areaLabelSpot(polygon: readonly XY[], name: string, obstacles: r
   let best: XY = middle;
   let bestScore = Math.min(room(middle), 2 * clearance);
   let bestDistance = 0;
-  for (let i = 1; i < 10; i++) {
-    for (let j = 1; j < 10; j++) {
-      const p: XY = [minX + ((maxX - minX) * i) / 10, minY + ((maxY - minY) * j) / 10];
-      const b = areaLabelBox(p, name);
-      const corners: XY[] = [[b.x0, b.y0], [b.x1, b.y0], [b.x0, b.y1], [b.x1, b.y1]];
-      if (!corners.every((c) => inside(c, polygon))) continue;
-      const score = Math.min(room(p), 2 * clearance);
-      const distance = Math.hypot(p[0] - middle[0], p[1] - middle[1]);
-      if (score > bestScore || (score === bestScore && distance < bestDistance)) {
-        best = p;
-        bestScore = score;
-        bestDistance = distance;
+  // First where the whole label fits inside the outline; when nowhere there is clear, where at
+  // least its middle is inside (a small plant room's name may overhang its outline).
+  for (const whole of [true, false]) {
+    for (let i = 1; i < 10; i++) {
+      for (let j = 1; j < 10; j++) {
+        const p: XY = [minX + ((maxX - minX) * i) / 10, minY + ((maxY - minY) * j) / 10];
+        const b = boxOf(p, name);
+        const corners: XY[] = [[b.x0, b.y0], [b.x1, b.y0], [b.x0, b.y1], [b.x1, b.y1]];
+        if (whole ? !corners.every((c) => inside(c, polygon)) : !inside(p, polygon)) continue;
+        const score = Math.min(room(p), 2 * clearance);
+        const distance = Math.hypot(p[0] - middle[0], p[1] - middle[1]);
+        if (score > bestScore || (score === bestScore && distance < bestDistance)) {
+          best = p;
+          bestScore = score;
+          bestDistance = distance;
+        }
       }
     }
+    if (bestScore >= clearance) break;
   }
   return best;
 }

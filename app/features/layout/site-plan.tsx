@@ -3,7 +3,7 @@
 // layers on top through `children(frame)` (emitters, readings, exposure) in site metres via
 // frame.toPx. Clicks report site coordinates, so a polygon can be drawn on the plan.
 import { useEffect, useId, useMemo, useRef, useState, type MouseEvent, type ReactNode } from "react";
-import { areaLabelBox, areaLabelSpot, type Rect } from "./label-spot";
+import { areaLabelBox, areaLabelSpot, lineLabelBox, type Rect } from "./label-spot";
 import { backdropCorners, boundsOf, makeFrame, scaleBarMetres, type Bounds, type PlanFrame, type XY } from "./plan-frame";
 
 export type PlanSurface = { id: string; name: string; kind: "area" | "facade"; polygon?: XY[] | null; line?: [XY, XY] | null; elevationM?: number | null; bottomM?: number | null; topM?: number | null; access: "public" | "workers" | "none" };
@@ -91,13 +91,15 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
       const [px, py] = frame.toPx(a.x, a.y);
       taken.push({ x0: px - 7, y0: py - 7, x1: px + 11 + a.name.length * 5.6, y1: py + 7 });
     }
+    const spots = new Map<string, XY>();
+    // Obstructions' names first, inside their own outlines; then the areas' names around them.
     for (const o of obstructions) {
       if (o.polygon.length < 3) continue;
-      const [px, py] = frame.toPx(...centroid(o.polygon));
-      const half = (o.name.length + 8) * 2.9;
-      taken.push({ x0: px - half, y0: py - 9, x1: px + half, y1: py + 3 });
+      const text = obstructionText(o);
+      const spot = areaLabelSpot(o.polygon.map((p) => frame.toPx(...p)), text, taken, 8, lineLabelBox);
+      spots.set(o.id, spot);
+      taken.push(lineLabelBox(spot, text));
     }
-    const spots = new Map<string, XY>();
     for (const s of surfaces) {
       if (s.kind !== "area" || !s.polygon || s.polygon.length < 3) continue;
       const spot = areaLabelSpot(s.polygon.map((p) => frame.toPx(...p)), s.name, taken);
@@ -182,8 +184,8 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
         o.polygon.length >= 3 ? (
           <g key={o.id}>
             <path d={path(o.polygon)} fill="url(#plan-solid)" className="stroke-graphite-600" strokeWidth={1.25} />
-            <text {...labelAt(frame, ...centroid(o.polygon))} className={`fill-ink-900 text-[10px] ${halo.className}`} strokeWidth={halo.strokeWidth} textAnchor="middle">
-              {o.name} · {o.heightM} m
+            <text {...(areaLabelSpots.has(o.id) ? { x: areaLabelSpots.get(o.id)![0], y: areaLabelSpots.get(o.id)![1] } : labelAt(frame, ...centroid(o.polygon)))} className={`fill-ink-900 text-[10px] ${halo.className}`} strokeWidth={halo.strokeWidth} textAnchor="middle">
+              {obstructionText(o)}
             </text>
           </g>
         ) : null,
@@ -223,6 +225,8 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
     </svg>
   );
 }
+
+const obstructionText = (o: PlanObstruction) => `${o.name} · ${o.heightM} m`;
 
 function centroid(points: XY[]): XY {
   const n = points.length || 1;
