@@ -42,8 +42,9 @@ describe("history in words", () => {
   });
 
   it("words an assessment's options and hides other records' ids", () => {
-    const rows = changeRows(null, { standard: "fcc", tier: "general", heights: { toM: 2, count: 11, fromM: 0 }, gridStepM: 0.5, assessmentId: "30ef3867-6f79-4644-93e0-6a9f2db31ebc", replaces: "3ce2ea1a" });
+    const rows = changeRows(null, { mode: "average", standard: "fcc", tier: "general", heights: { toM: 2, count: 11, fromM: 0 }, gridStepM: 0.5, assessmentId: "30ef3867-6f79-4644-93e0-6a9f2db31ebc", replaces: "3ce2ea1a" });
     expect(rows).toEqual([
+      { field: "Evaluation", before: "", after: "spatial average" },
       { field: "Standard", before: "", after: "FCC 47 CFR §1.1310" },
       { field: "Tier", before: "", after: "general public / uncontrolled" },
       { field: "Heights above each surface", before: "", after: "0–2 m, 11 heights" },

@@ -161,6 +161,7 @@ function showFieldValue(key: string, value: unknown, currency: string | null = n
   if ((key === "standard" || key === "percentStandard") && typeof value === "string") return standardLabels[value as keyof typeof standardLabels] ?? value;
   if ((key === "tier" || key === "percentTier") && typeof value === "string") return tierLabels[value as keyof typeof tierLabels] ?? value;
   if (key === "state" && typeof value === "string") return stateWords[value] ?? value;
+  if (key === "mode" && typeof value === "string") return ({ average: "spatial average", max: "maximum" } as Record<string, string>)[value] ?? value;
   if (key === "heights" && value && typeof value === "object") {
     const h = value as { fromM?: unknown; toM?: unknown; count?: unknown };
     if (typeof h.fromM === "number" && typeof h.toM === "number" && typeof h.count === "number") {
