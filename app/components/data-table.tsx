@@ -3,7 +3,7 @@
 import { flexRender, getCoreRowModel, useReactTable, type ColumnDef } from "@tanstack/react-table";
 import type { ReactNode } from "react";
 import { Link, useNavigate, useSearchParams } from "react-router";
-import { PAGE_SIZES } from "~/lib/paging";
+import { pageSizeOptions, pageWindow } from "~/lib/paging";
 
 declare module "@tanstack/react-table" {
   interface ColumnMeta<TData, TValue> {
@@ -39,9 +39,7 @@ export function DataTable<Row>({ caption, columns, rows, total, page, pageSize, 
   const [params] = useSearchParams();
   const navigate = useNavigate();
   const table = useReactTable({ data: rows, columns, getCoreRowModel: getCoreRowModel(), manualPagination: true, manualSorting: true, getRowId });
-  const pages = Math.max(1, Math.ceil(total / pageSize));
-  const from = total === 0 ? 0 : (page - 1) * pageSize + 1;
-  const to = Math.min(total, page * pageSize);
+  const { pages, pastEnd, text } = pageWindow(total, page, pageSize);
   return (
     <div>
       <div className="relative overflow-x-auto rounded-sheet border border-rule bg-white">
@@ -93,10 +91,23 @@ export function DataTable<Row>({ caption, columns, rows, total, page, pageSize, 
             ))}
           </tbody>
         </table>
-        {rows.length === 0 ? <div className="px-6 py-10 text-center text-sm text-graphite-600">{empty}</div> : null}
+        {rows.length === 0 ? (
+          <div className="px-6 py-10 text-center text-sm text-graphite-600">
+            {pastEnd ? (
+              <>
+                This list has {pages === 1 ? "one page" : `${pages} pages`}; there is nothing on page {page}.{" "}
+                <Link className="underline" to={withParams(params, { page: pages === 1 ? null : String(pages) })}>
+                  Go to page {pages}
+                </Link>
+              </>
+            ) : (
+              empty
+            )}
+          </div>
+        ) : null}
       </div>
       <nav aria-label="Pages" className="mt-3 flex flex-wrap items-center justify-between gap-3 text-sm text-graphite-600">
-        <span className="tabular-nums">{total === 0 ? "Nothing to show" : `${from}–${to} of ${total}`}</span>
+        <span className="tabular-nums">{text}</span>
         <span className="flex items-center gap-2">
           <label className="flex items-center gap-1">
             <span>Rows</span>
@@ -107,14 +118,14 @@ export function DataTable<Row>({ caption, columns, rows, total, page, pageSize, 
                 navigate(withParams(params, { pageSize: e.target.value, page: null }));
               }}
             >
-              {PAGE_SIZES.map((n) => (
+              {pageSizeOptions(pageSize).map((n) => (
                 <option key={n} value={n}>
                   {n}
                 </option>
               ))}
             </select>
           </label>
-          {page > 1 ? (
+          {page > 1 && !pastEnd ? (
             <Link className="rounded-control px-2 py-1 ring-1 ring-rule hover:bg-paper" to={withParams(params, { page: String(page - 1) })}>
               Previous
             </Link>

@@ -28,3 +28,21 @@ export function readSort<K extends string>(params: URLSearchParams, keys: readon
 export function likePattern(q: string) {
   return `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
 }
+
+/**
+ * What a paged list shows under the table: the rows' range, the page count, and whether the page
+ * asked for lies past the last one (a hand-edited or stale address after rows were removed).
+ */
+export function pageWindow(total: number, page: number, pageSize: number) {
+  const pages = Math.max(1, Math.ceil(total / pageSize));
+  const pastEnd = total > 0 && page > pages;
+  if (total === 0 || pastEnd) return { pages, pastEnd, from: 0, to: 0, text: total === 0 ? "Nothing to show" : `${total} in all` };
+  const from = (page - 1) * pageSize + 1;
+  const to = Math.min(total, page * pageSize);
+  return { pages, pastEnd, from, to, text: `${from}–${to} of ${total}` };
+}
+
+/** The page sizes a list offers, with the one in the address when it is not a usual one. */
+export function pageSizeOptions(pageSize: number): number[] {
+  return [...new Set<number>([...PAGE_SIZES, pageSize])].sort((a, b) => a - b);
+}

@@ -79,7 +79,7 @@ test("freeze the demo rooftop, edit the plan, change an emitter, freeze again an
   const emitters = page.locator("div", { has: page.getByRole("heading", { name: "Emitters", level: 4 }) }).last();
   await expect(emitters.getByText(`Changed ${EMITTER}:`)).toBeVisible();
   await expect(emitters.locator("ul ul li")).toHaveCount(1); // exactly the one field changed
-  await expect(emitters.locator("ul ul li")).toHaveText(/powerPerCarrierW\s*60\s*→\s*20/);
+  await expect(emitters.locator("ul ul li")).toHaveText(/Power per carrier \(W\)\s*60\s*→\s*20/);
   await expect(emitters.getByText(/^Added|^Removed/)).toHaveCount(0);
   await expect(page.getByText("Same options.")).toBeVisible();
   await expect(page.getByRole("img", { name: "Main roof (A): exposure classes" })).toBeVisible();

@@ -130,7 +130,7 @@ test("Exposure from the map to two compared assessments", async ({ page }, info)
   await expect(page.getByRole("heading", { name: "Compare two assessments" })).toBeVisible();
   const emitters = page.locator("div", { has: page.getByRole("heading", { name: "Emitters", level: 4 }) }).last();
   await expect(emitters.getByText(`Changed ${EMITTER}:`)).toBeVisible();
-  await expect(emitters.locator("ul ul li").filter({ hasText: "powerPerCarrierW" })).toHaveText(/powerPerCarrierW\s*60\s*→\s*20/);
+  await expect(emitters.locator("ul ul li").filter({ hasText: "Power per carrier (W)" })).toHaveText(/Power per carrier \(W\)\s*60\s*→\s*20/);
   await expect(page.getByRole("img", { name: "Main roof (A): exposure classes" })).toBeVisible();
   await expect(page.getByRole("img", { name: "Main roof (B): exposure classes" })).toBeVisible();
   await expect(page.getByRole("complementary", { name: "RF safety cautions" })).toBeVisible();

@@ -147,6 +147,7 @@ test("an engineer records a visit with a photo and readings, and finds it in His
   await expect(importer.getByText("Stored 3 readings.")).toBeVisible();
   await expect(table.getByRole("row", { name: /C1/ })).toContainText("5.80 W/m²");
   await expect(table.getByRole("row", { name: /C3/ })).toContainText("0.942 W/m²"); // 376.73 × 0.05²
+  await expect(page.getByRole("complementary", { name: "RF safety cautions" })).toBeVisible(); // readings are results (DESIGN.md §5)
   await shot(page, info, "04-visit-1280");
   const axe = await new AxeBuilder({ page }).analyze();
   expect(axe.violations.filter((v) => v.impact === "serious" || v.impact === "critical").map((v) => `${v.id}: ${v.help}`)).toEqual([]);

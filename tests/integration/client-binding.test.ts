@@ -7,6 +7,7 @@ import { acceptAsNewUser } from "~/features/members/invitations.server";
 import { scopeOf } from "~/features/sites/scope.server";
 import { createSite, findSite, listSites } from "~/features/sites/sites.server";
 import { db, schema } from "~/infra/db.server";
+import * as clientPage from "~/routes/clients/client";
 import * as members from "~/routes/members/members";
 import { createOrg, makeRequest, outcome, type Org } from "./fixtures";
 
@@ -50,6 +51,21 @@ describe("client members", () => {
     expect(await findSite(scope, mine)).not.toBeNull();
     const clients = await listClients(scope, { page: 1, pageSize: 50, q: "", sort: "name", dir: "asc" });
     expect(clients.clients.map((c) => c.name)).toEqual(["Bound Landlord"]);
+  });
+
+  it("are not offered a second invitation on the client's page once they sign in", async () => {
+    const c = await createClient(owner(), {
+      name: "Joined Landlord",
+      billingAddress: "",
+      notes: "",
+      contacts: [
+        { name: "Already Here", email: org.people.client.email.toUpperCase(), phone: "", role: "" },
+        { name: "Not Yet", email: `not-yet-${org.id}@fixture.test`, phone: "", role: "" },
+      ],
+    });
+    const page = (await clientPage.loader({ request: makeRequest(`/clients/${c.id}`, { cookie: org.people.owner.cookie }), params: { clientId: c.id }, context: {} } as never)) as { client: { contacts: { id: string; name: string }[] }; signsIn: string[] };
+    const byName = Object.fromEntries(page.client.contacts.map((x) => [x.name, x.id]));
+    expect(page.signsIn).toEqual([byName["Already Here"]]);
   });
 
   it("see nothing at all while bound to no client", async () => {

@@ -147,6 +147,15 @@ describe("the PDFs", () => {
 });
 
 describe("review and issue", () => {
+  it("names the assessment each document was drawn from, on the site's list and on the document's page", async () => {
+    const id = await draft("engineer", "letter");
+    const request = (path: string) => makeRequest(path, { cookie: a.people.engineer.cookie });
+    const listed = (await sitePage.loader({ request: request(`/sites/${siteId}/documents`), params: { siteId }, context: {} } as never)) as { documents: { id: string; assessmentName: string }[] };
+    expect(listed.documents.find((d) => d.id === id)?.assessmentName).toBe("Documents baseline");
+    const page = (await documentPage.loader({ request: request(`/sites/${siteId}/documents/${id}`), params: { siteId, documentId: id }, context: {} } as never)) as { assessment: { name: string; createdAt: string } | null };
+    expect(page.assessment).toEqual({ name: "Documents baseline", createdAt: assessment.createdAt.toISOString() });
+  });
+
   it("refuses issuing by the author (two-person rule), by a non-reviewer, and out of order", async () => {
     expect((await step(a, "reviewer", docs.report, { intent: "issue" })).status).toBe(409); // still a draft
     expect((await step(a, "engineer", docs.report, { intent: "submit" })).status).toBe(302);

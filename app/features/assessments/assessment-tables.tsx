@@ -1,9 +1,10 @@
 // The frozen results as tables: per surface the worst point, its largest contributors and the area in
 // each class; per emitter its EIRP and compliance distances for both tiers.
-import { figure, figure3 } from "./format";
+import { areaFigure, figure, figure3 } from "./format";
 import type { AssessmentView } from "./view";
 
-const m2 = (v: number) => <span className="figures">{v.toFixed(1)} m²</span>;
+// Figures and their units stay on one line (a narrow column wrapped "1120.0" and "m²" apart).
+const m2 = (v: number) => <span className="figures whitespace-nowrap">{areaFigure(v)} m²</span>;
 const th = "label-caps px-3 py-2 text-left font-medium";
 const td = "px-3 py-2 align-top";
 
@@ -22,9 +23,17 @@ export function AssessmentTables({ view }: { view: Pick<AssessmentView, "surface
               {view.surfaces.map((s) => (
                 <tr key={s.surfaceId} className="border-b border-rule last:border-b-0">
                   <th scope="row" className={`${td} text-left font-medium break-words`}>{s.name}{s.kind === "facade" ? " (facade)" : ""}</th>
-                  <td className={`${td} figures`}>{figure(s.worstPercent)} %</td>
+                  <td className={`${td} figures whitespace-nowrap`}>{figure(s.worstPercent)} %</td>
                   <td className={`${td} figures whitespace-nowrap`}>{s.worstAt ? `${s.worstAt.x}, ${s.worstAt.y}, ${s.worstAt.z}` : "—"}</td>
-                  <td className={td}>{s.contributions.map((c) => `${c.id} ${figure3(c.percent)} %`).join("; ") || "—"}</td>
+                  <td className={td}>
+                    {s.contributions.length
+                      ? s.contributions.map((c) => (
+                          <span key={c.id} className="block whitespace-nowrap">
+                            {c.id} {figure3(c.percent)} %
+                          </span>
+                        ))
+                      : "—"}
+                  </td>
                   <td className={td}>{m2(s.areas.totalM2)}</td>
                   <td className={td}>{m2(s.areas.overGeneralM2)}</td>
                   <td className={td}>{m2(s.areas.overOccupationalM2)}</td>

@@ -33,6 +33,12 @@ export function listAssessments(siteId: string): Promise<AssessmentListRow[]> {
   return db.select(listColumns).from(assessment).where(eq(assessment.siteId, siteId)).orderBy(desc(assessment.createdAt)).limit(500);
 }
 
+/** An assessment's name and freezing time, to title what was drawn from it. The caller has checked the site is in scope. */
+export async function assessmentTitle(siteId: string, id: string): Promise<{ name: string; createdAt: Date } | null> {
+  const [row] = await db.select({ name: assessment.name, createdAt: assessment.createdAt }).from(assessment).where(and(eq(assessment.siteId, siteId), eq(assessment.id, id)));
+  return row ?? null;
+}
+
 /** One assessment within the scope (and the site, when the address names one), or null. */
 export async function findAssessment(scope: Scope, id: string, siteId?: string): Promise<AssessmentRow | null> {
   const [row] = await db

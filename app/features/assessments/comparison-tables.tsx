@@ -1,11 +1,13 @@
 // What changed between two assessments: options, inventory records (added, removed, each changed
 // field before and after) and results (worst point and areas per surface, A beside B).
+import { fieldLabel, showField } from "~/features/history/describe";
 import type { Comparison, Pair, RecordDiff } from "./compare";
 import { figure } from "./format";
 
 const th = "label-caps px-3 py-2 text-left font-medium";
 const td = "px-3 py-2 align-top";
-const show = (v: unknown) => (v === null || v === undefined ? "—" : typeof v === "object" ? JSON.stringify(v) : String(v));
+/** "Grid step (m) 0.5 → 1": the field's label and its values in words, as the History shows them. */
+const change = (f: { field: string; before: unknown; after: unknown }) => `${fieldLabel(f.field)} ${showField(f.field, f.before)} → ${showField(f.field, f.after)}`;
 
 function Changes({ title, diff }: { title: string; diff: RecordDiff }) {
   const none = !diff.added.length && !diff.removed.length && !diff.changed.length;
@@ -20,7 +22,7 @@ function Changes({ title, diff }: { title: string; diff: RecordDiff }) {
             <li key={`c${r.id}`}>
               <span className="font-medium">Changed</span> <span className="break-words">{r.label}</span>:
               <ul className="ml-5 list-disc">
-                {r.fields.map((f) => <li key={f.field} className="[overflow-wrap:anywhere]"><code>{f.field}</code> <span className="figures">{show(f.before)}</span> → <span className="figures">{show(f.after)}</span></li>)}
+                {r.fields.map((f) => <li key={f.field} className="[overflow-wrap:anywhere]">{change(f)}</li>)}
               </ul>
             </li>
           ))}
@@ -41,7 +43,7 @@ export function ComparisonTables({ comparison }: { comparison: Comparison }) {
     <>
       <section aria-labelledby="inventory-changes" className="space-y-3">
         <h3 id="inventory-changes" className="text-lg font-semibold">What changed in the inventory</h3>
-        {comparison.options.length ? <p className="text-sm">Options: {comparison.options.map((f) => `${f.field} ${show(f.before)} → ${show(f.after)}`).join("; ")}</p> : <p className="text-sm text-graphite-600">Same options.</p>}
+        {comparison.options.length ? <p className="text-sm">Options: {comparison.options.map(change).join("; ")}</p> : <p className="text-sm text-graphite-600">Same options.</p>}
         <div className="grid gap-4 md:grid-cols-2">
           <Changes title="Emitters" diff={comparison.inventory.emitters} />
           <Changes title="Surfaces" diff={comparison.inventory.surfaces} />

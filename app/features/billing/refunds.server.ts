@@ -31,7 +31,7 @@ export async function refundPayment(actor: Actor, input: { paymentId: string; am
     const state = refunded >= locked.amount ? "refunded" : "partly_refunded";
     await tx.update(payment).set({ amountRefunded: refunded, state, updatedAt: new Date() }).where(eq(payment.id, p.id));
     await tx.insert(refund).values({ organizationId: p.organizationId, paymentId: p.id, stripeRefundId: made.id, amount: made.amount, reason: input.reason, createdByUserId: actor.userId }).onConflictDoUpdate({ target: refund.stripeRefundId, set: { reason: input.reason, createdByUserId: actor.userId } });
-    await auditChange(tx, actor, { action: "payment.refunded", entity: "payment", entityId: p.id, before: { amountRefunded: locked.amountRefunded }, after: { amountRefunded: refunded, refund: made.amount, reason: input.reason } });
+    await auditChange(tx, actor, { action: "payment.refunded", entity: "payment", entityId: p.id, before: { amountRefunded: locked.amountRefunded, currency: locked.currency }, after: { amountRefunded: refunded, refund: made.amount, currency: locked.currency, reason: input.reason } });
     if (p.invoiceId) await refreshInvoice(tx, p.invoiceId);
     return { refunded, state };
   });

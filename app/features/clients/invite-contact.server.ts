@@ -1,5 +1,5 @@
 // Inviting a client's contact as a `client` member bound to that client.
-import { and, eq } from "drizzle-orm";
+import { and, eq, inArray } from "drizzle-orm";
 import { inviteMember } from "~/features/members/invitations.server";
 import { db, schema } from "~/infra/db.server";
 import type { Actor } from "~/lib/audit.server";
@@ -14,4 +14,19 @@ export async function inviteClientContact(actor: Actor & { inviterName: string; 
   if (!contact.email) throw new DomainError(`${contact.name} has no e-mail address. Add one first.`, 400);
   await inviteMember(actor, contact.email, "client", { clientId, contactId: contact.id });
   return contact;
+}
+
+/**
+ * Which of these e-mail addresses already belong to a member of the organisation: the client page
+ * offers no invitation to them (inviting one would be refused as "already a member").
+ */
+export async function memberAddresses(organizationId: string, emails: readonly string[]): Promise<Set<string>> {
+  const wanted = [...new Set(emails.filter(Boolean))];
+  if (!wanted.length) return new Set();
+  const rows = await db
+    .select({ email: schema.user.email })
+    .from(schema.member)
+    .innerJoin(schema.user, eq(schema.user.id, schema.member.userId))
+    .where(and(eq(schema.member.organizationId, organizationId), inArray(schema.user.email, wanted)));
+  return new Set(rows.map((r) => r.email));
 }

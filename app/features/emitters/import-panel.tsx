@@ -73,7 +73,7 @@ export function ImportPanel({ siteId, count }: { siteId: string; count: number }
   return (
     <div className="space-y-3">
       <div className="flex flex-wrap items-end gap-3">
-        <div className="min-w-0 flex-1">
+        <div className="min-w-0 flex-1 basis-60">
           <label htmlFor="emitters-csv" className="mb-1 block text-sm font-medium text-ink-900">
             CSV file (at most 5 MB)
           </label>

@@ -119,7 +119,13 @@ export function PatternCreator() {
           {message.text}
         </p>
       ) : null}
-      <Button disabled={busy || !spec}>{busy ? "Saving…" : "Save to the library"}</Button>
+      {!spec && !message ? (
+        <p className="text-sm text-graphite-600">
+          {kind === "tabulated" ? "Choose the CSV file of the cuts: both are drawn here before anything is saved." : "Enter both beamwidths to draw the pattern before saving."}
+        </p>
+      ) : null}
+      {/* Not disabled without a pattern: a click says what is missing instead of doing nothing. */}
+      <Button disabled={busy}>{busy ? "Saving…" : "Save to the library"}</Button>
     </form>
   );
 }

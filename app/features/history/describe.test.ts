@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { changeRows, describeAction, showValue } from "./describe";
+import { changeRows, describeAction, recordLabel, showValue } from "./describe";
 
 describe("history in words", () => {
   it("names the action and the record", () => {
@@ -29,5 +29,41 @@ describe("history in words", () => {
       { field: "Client", before: "", after: "Larch & Co" },
       { field: "Pattern", before: "", after: "a removed record" },
     ]);
+  });
+
+  it("shows a document's step as a change of state only, named by its kind and version", () => {
+    // The document commands record { state } before and { kind, version, state } after.
+    const before = { state: "in_review" };
+    const after = { kind: "report", state: "issued", version: 2 };
+    expect(changeRows(before, after)).toEqual([{ field: "State", before: "in review", after: "issued" }]);
+    expect(recordLabel(after)).toBe("report v2");
+    expect(recordLabel({ kind: "letter", version: 1 })).toBe("landlord letter v1");
+    expect(recordLabel({ name: "Tower", kind: "rooftop", version: 3 })).toBe("Tower");
+  });
+
+  it("words an assessment's options and hides other records' ids", () => {
+    const rows = changeRows(null, { mode: "average", standard: "fcc", tier: "general", heights: { toM: 2, count: 11, fromM: 0 }, gridStepM: 0.5, assessmentId: "30ef3867-6f79-4644-93e0-6a9f2db31ebc", replaces: "3ce2ea1a" });
+    expect(rows).toEqual([
+      { field: "Evaluation", before: "", after: "spatial average" },
+      { field: "Standard", before: "", after: "FCC 47 CFR §1.1310" },
+      { field: "Tier", before: "", after: "general public / uncontrolled" },
+      { field: "Heights above each surface", before: "", after: "0–2 m, 11 heights" },
+      { field: "Grid step (m)", before: "", after: "0.5" },
+    ]);
+  });
+
+  it("shows billing amounts as money, not as cents", () => {
+    // payment.received and payment.refunded events (payment-events.server.ts, refunds.server.ts).
+    expect(changeRows(null, { amount: 60000, currency: "eur", purpose: "invoice", invoiceId: "b061be14" })).toEqual([
+      { field: "Amount", before: "", after: "€600.00" },
+      { field: "Currency", before: "", after: "EUR" },
+      { field: "For", before: "", after: "invoice" },
+    ]);
+    expect(changeRows({ amountRefunded: 0, currency: "gbp" }, { amountRefunded: 30000, refund: 30000, currency: "gbp" })).toEqual([
+      { field: "Refunded in all", before: "£0.00", after: "£300.00" },
+      { field: "Refunded now", before: "—", after: "£300.00" },
+    ]);
+    // An older event without its currency still reads as an amount, not as 30000.
+    expect(changeRows({ amountRefunded: 0 }, { amountRefunded: 30000, reason: "" })).toEqual([{ field: "Refunded in all", before: "0.00", after: "300.00" }]);
   });
 });

@@ -126,7 +126,7 @@ export function BackdropPanel({ siteId, backdrop, onChange }: Props) {
         <p className="text-sm text-graphite-600">Upload a roof drawing or an aerial image to trace over. PNG, JPEG or WebP, up to 10 MB.</p>
       )}
       <div className="flex flex-wrap items-end gap-2">
-        <div className="min-w-0 flex-1">
+        <div className="min-w-0 flex-1 basis-60">
           <label htmlFor="backdrop-file" className="mb-1 block text-xs font-medium text-graphite-600">
             {backdrop ? "Replace with another image" : "Image"}
           </label>

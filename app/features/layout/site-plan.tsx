@@ -3,6 +3,7 @@
 // layers on top through `children(frame)` (emitters, readings, exposure) in site metres via
 // frame.toPx. Clicks report site coordinates, so a polygon can be drawn on the plan.
 import { useEffect, useId, useMemo, useRef, useState, type MouseEvent, type ReactNode } from "react";
+import { areaLabelBox, areaLabelSpot, lineLabelBox, type Rect } from "./label-spot";
 import { backdropCorners, boundsOf, makeFrame, scaleBarMetres, type Bounds, type PlanFrame, type XY } from "./plan-frame";
 
 export type PlanSurface = { id: string; name: string; kind: "area" | "facade"; polygon?: XY[] | null; line?: [XY, XY] | null; elevationM?: number | null; bottomM?: number | null; topM?: number | null; access: "public" | "workers" | "none" };
@@ -79,6 +80,35 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
     return makeFrame(fixedBounds ?? boundsOf(points), { width: planWidth });
   }, [surfaces, obstructions, accessPoints, extraPoints, draft, planWidth, backdrop, fixedBounds]);
 
+  // Area names go where the emitters, access points and other names leave room (label-spot.ts).
+  const areaLabelSpots = useMemo(() => {
+    const taken: Rect[] = [];
+    for (const [x, y] of extraPoints) {
+      const [px, py] = frame.toPx(x, y);
+      taken.push({ x0: px - 12, y0: py - 12, x1: px + 12, y1: py + 12 });
+    }
+    for (const a of accessPoints) {
+      const [px, py] = frame.toPx(a.x, a.y);
+      taken.push({ x0: px - 7, y0: py - 7, x1: px + 11 + a.name.length * 5.6, y1: py + 7 });
+    }
+    const spots = new Map<string, XY>();
+    // Obstructions' names first, inside their own outlines; then the areas' names around them.
+    for (const o of obstructions) {
+      if (o.polygon.length < 3) continue;
+      const text = obstructionText(o);
+      const spot = areaLabelSpot(o.polygon.map((p) => frame.toPx(...p)), text, taken, 8, lineLabelBox);
+      spots.set(o.id, spot);
+      taken.push(lineLabelBox(spot, text));
+    }
+    for (const s of surfaces) {
+      if (s.kind !== "area" || !s.polygon || s.polygon.length < 3) continue;
+      const spot = areaLabelSpot(s.polygon.map((p) => frame.toPx(...p)), s.name, taken);
+      spots.set(s.id, spot);
+      taken.push(areaLabelBox(spot, s.name));
+    }
+    return spots;
+  }, [frame, surfaces, obstructions, accessPoints, extraPoints]);
+
   const toSiteFromEvent = (event: MouseEvent<SVGSVGElement>): XY | null => {
     const svg = svgRef.current;
     const matrix = svg?.getScreenCTM();
@@ -142,10 +172,7 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
       </g>
       {surfaces.map((s) =>
         s.kind === "area" && s.polygon && s.polygon.length >= 3 ? (
-          <g key={s.id}>
-            <path d={path(s.polygon)} fill={fills[s.access]} fillOpacity={backdrop ? 0.6 : 1} className={s.id === highlightId ? "stroke-ink-900" : "stroke-graphite-600"} strokeWidth={s.id === highlightId ? 2.5 : 1.25} />
-            <AreaLabel frame={frame} surface={s} />
-          </g>
+          <path key={s.id} d={path(s.polygon)} fill={fills[s.access]} fillOpacity={backdrop ? 0.6 : 1} className={s.id === highlightId ? "stroke-ink-900" : "stroke-graphite-600"} strokeWidth={s.id === highlightId ? 2.5 : 1.25} />
         ) : s.kind === "facade" && s.line ? (
           <g key={s.id}>
             <path d={path(s.line, false)} className={s.id === highlightId ? "stroke-ink-900" : "stroke-ink-700"} strokeWidth={5} strokeLinecap="butt" />
@@ -157,12 +184,14 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
         o.polygon.length >= 3 ? (
           <g key={o.id}>
             <path d={path(o.polygon)} fill="url(#plan-solid)" className="stroke-graphite-600" strokeWidth={1.25} />
-            <text {...labelAt(frame, ...centroid(o.polygon))} className={`fill-ink-900 text-[10px] ${halo.className}`} strokeWidth={halo.strokeWidth} textAnchor="middle">
-              {o.name} · {o.heightM} m
+            <text {...(areaLabelSpots.has(o.id) ? { x: areaLabelSpots.get(o.id)![0], y: areaLabelSpots.get(o.id)![1] } : labelAt(frame, ...centroid(o.polygon)))} className={`fill-ink-900 text-[10px] ${halo.className}`} strokeWidth={halo.strokeWidth} textAnchor="middle">
+              {obstructionText(o)}
             </text>
           </g>
         ) : null,
       )}
+      {/* Every area's name over every area's and obstruction's fill, so a lower level drawn later does not hide a higher one's name. */}
+      {surfaces.map((s) => (s.kind === "area" && s.polygon && s.polygon.length >= 3 ? <AreaLabel key={s.id} frame={frame} surface={s} at={areaLabelSpots.get(s.id)} /> : null))}
       {accessPoints.map((a) => {
         const [px, py] = frame.toPx(a.x, a.y);
         return (
@@ -197,6 +226,8 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
   );
 }
 
+const obstructionText = (o: PlanObstruction) => `${o.name} · ${o.heightM} m`;
+
 function centroid(points: XY[]): XY {
   const n = points.length || 1;
   return [points.reduce((s, p) => s + p[0], 0) / n, points.reduce((s, p) => s + p[1], 0) / n];
@@ -207,9 +238,9 @@ function labelAt(frame: PlanFrame, x: number, y: number) {
   return { x: px, y: py };
 }
 
-function AreaLabel({ frame, surface }: { frame: PlanFrame; surface: PlanSurface }) {
+function AreaLabel({ frame, surface, at }: { frame: PlanFrame; surface: PlanSurface; at?: XY }) {
   const [cx, cy] = centroid(surface.polygon ?? []);
-  const { x, y } = labelAt(frame, cx, cy);
+  const { x, y } = at ? { x: at[0], y: at[1] } : labelAt(frame, cx, cy);
   const elevation = surface.elevationM ?? 0;
   return (
     <text x={x} y={y} textAnchor="middle" className={`pointer-events-none fill-ink-900 text-[11px] ${halo.className}`} strokeWidth={halo.strokeWidth}>

@@ -54,6 +54,17 @@ const inventoryNow = [
   "See every change to a site, who made it and when, in its History.",
 ];
 
+/** The analysis and documents, as each inventory role may take part in them (lifecycle.ts, filings). */
+const exposureNow = "Map the exposure on every level, try what-if changes, and freeze an assessment with its mitigation plan.";
+const draftNow = "Draft a report, landlord letter or certificate from an assessment and send it for review.";
+const reviewNow = "Review and issue the documents your colleagues drafted; never your own (two-person rule).";
+const fileNow = "File an issued assessment with a regulator from Filings.";
+const billingNow = [
+  "Make an invoice for a client from its assessments and the price list, and send it with a pay link.",
+  "Follow payments as they arrive, refund all or part of one, and download them as CSV.",
+  "Keep the price list: assessment fee, certificate fee, rush surcharge.",
+];
+
 function sitesNext(inventory: Inventory): NextStep {
   if (inventory.sites === 0) {
     return { title: "Record your first site", text: "Start with its address and client, then draw its layout and add its emitters.", to: "/sites", action: "Open Sites" };
@@ -67,13 +78,16 @@ function sitesNext(inventory: Inventory): NextStep {
 }
 
 export function guideFor(role: Role, team: Team | null, inventory: Inventory | null = null): Guide {
-  if ((role === "engineer" || role === "reviewer") && inventory) {
-    return { now: [...inventoryNow, "Change your password from Account."], next: sitesNext(inventory) };
+  if (role === "engineer" && inventory) {
+    return { now: [...inventoryNow, exposureNow, draftNow, fileNow, "Change your password from Account."], next: sitesNext(inventory) };
+  }
+  if (role === "reviewer" && inventory) {
+    return { now: [...inventoryNow, exposureNow, draftNow, reviewNow, fileNow, "Change your password from Account."], next: sitesNext(inventory) };
   }
   if (role === "billing" && inventory) {
     return {
-      now: ["Read the clients and sites your organisation records (read-only).", "Change your password from Account."],
-      next: { ...sitesNext(inventory), title: `${plural(inventory.sites, "site", "sites")} on record`, text: "Look up a site or a client and its contacts." },
+      now: [...billingNow, "Read the clients and sites your organisation records (read-only).", "Change your password from Account."],
+      next: { title: "Invoices and payments", text: "See which invoices are open, paid or refunded, or make a new one.", to: "/billing", action: "Open Billing" },
     };
   }
   if (role === "owner") {
@@ -81,7 +95,7 @@ export function guideFor(role: Role, team: Team | null, inventory: Inventory | n
       now: [
         "Invite colleagues by e-mail and choose each one's role.",
         "Change a member's role or remove them; withdraw an invitation or send it again.",
-        ...(inventory ? [inventoryNow[1], "Read every change anyone made in History."] : []),
+        ...(inventory ? [inventoryNow[1], exposureNow, draftNow, "Make invoices, follow payments and refund them in Billing.", "Read every change anyone made in History."] : []),
         "Change your own password from Account.",
       ],
       next: team && team.members <= 1 ? ownerNext(team) : inventory && inventory.sites === 0 ? sitesNext(inventory) : ownerNext(team ?? { members: 1, pending: 0 }),

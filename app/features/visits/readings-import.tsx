@@ -42,7 +42,7 @@ export function ReadingsImport({ visitId }: { visitId: string }) {
   return (
     <form onSubmit={onSubmit} className="space-y-3">
       <div className="flex flex-wrap items-end gap-3">
-        <div className="min-w-0 flex-1">
+        <div className="min-w-0 flex-1 basis-60">
           <label htmlFor="readings-csv" className="mb-1 block text-sm font-medium text-ink-700">
             CSV file
           </label>

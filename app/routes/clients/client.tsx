@@ -15,7 +15,7 @@ import { listSites } from "~/features/sites/sites.server";
 import { redirectWithFlash } from "~/infra/flash.server";
 import { DomainError, domainErrorReply } from "~/lib/domain-error";
 import { forbidden, found } from "~/lib/responses.server";
-import { inviteClientContact } from "~/features/clients/invite-contact.server";
+import { inviteClientContact, memberAddresses } from "~/features/clients/invite-contact.server";
 import { canEditInventory, inventoryEditors, staffRoles } from "~/lib/roles";
 import type { Route } from "./+types/client";
 
@@ -26,7 +26,11 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   const scope = scopeOf(member);
   const client = found(await findClient(scope, params.clientId), "No such client in your organisation.");
   const { sites, total } = await listSites(scope, { page: 1, pageSize: 100, q: "", clientId: client.id, sort: "name", dir: "asc" });
-  return { client, sites, siteTotal: total, canEdit: canEditInventory(member.role), canInvite: member.role === "owner" };
+  const canInvite = member.role === "owner";
+  // Contacts who already sign in (as members) are not offered an invitation the server would refuse.
+  const members = canInvite ? await memberAddresses(member.organizationId, client.contacts.map((c) => (c.email ?? "").toLowerCase())) : new Set<string>();
+  const signsIn = client.contacts.filter((c) => c.email && members.has(c.email.toLowerCase())).map((c) => c.id);
+  return { client, sites, siteTotal: total, canEdit: canEditInventory(member.role), canInvite, signsIn };
 }
 
 export async function action({ request, params, context }: Route.ActionArgs) {
@@ -125,7 +129,9 @@ export default function ClientPage({ loaderData, actionData }: Route.ComponentPr
                     {c.role ? <span className="font-normal text-graphite-600"> · {c.role}</span> : null}
                   </span>
                   <span className="block break-words text-graphite-600">{[c.email, c.phone].filter(Boolean).join(" · ") || "No e-mail or phone"}</span>
-                  {canInvite && c.email ? (
+                  {canInvite && loaderData.signsIn.includes(c.id) ? (
+                    <span className="mt-1 block text-sm text-graphite-600">Already a member of your organisation: no invitation needed.</span>
+                  ) : canInvite && c.email ? (
                     <Form method="post" className="mt-1">
                       <input type="hidden" name="intent" value="invite-contact" />
                       <input type="hidden" name="contactId" value={c.id} />

@@ -9,6 +9,7 @@ import { FormErrors, TextAreaField } from "~/components/field";
 import { Card, Notice } from "~/components/panels";
 import { requireMember } from "~/features/auth/guard.server";
 import { issueDocument, reissueDocument, returnDocument, submitDocument, withdrawDocument } from "~/features/documents/commands.server";
+import { assessmentTitle } from "~/features/assessments/assessments.server";
 import { findDocument } from "~/features/documents/documents.server";
 import { kindLabels, renderLabels, stateLabels } from "~/features/documents/labels";
 import { availableSteps } from "~/features/documents/lifecycle";
@@ -28,7 +29,9 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   const member = await requireMember({ request, context }, { roles: staffRoles });
   const d = found(await findDocument(scopeOf(member), params.documentId, params.siteId), "No such document of this site.");
   const { pdf: _none, ...doc } = { ...d, pdf: null };
+  const from = await assessmentTitle(d.siteId, d.assessmentId);
   return {
+    assessment: from ? { name: from.name, createdAt: from.createdAt.toISOString() } : null,
     doc: { ...doc, createdAt: d.createdAt.toISOString(), issuedAt: d.issuedAt?.toISOString() ?? null, expiresAt: d.expiresAt?.toISOString() ?? null, submittedAt: d.submittedAt?.toISOString() ?? null, withdrawnAt: d.withdrawnAt?.toISOString() ?? null, supersededAt: d.supersededAt?.toISOString() ?? null, renderedAt: d.renderedAt?.toISOString() ?? null, updatedAt: d.updatedAt.toISOString() },
     steps: availableSteps(d, { userId: member.user.id, role: member.role }),
     isAuthor: d.authorUserId === member.user.id,
@@ -76,7 +79,13 @@ export default function DocumentPage({ loaderData, actionData }: Route.Component
       <div>
         <p className="text-sm text-graphite-600"><Link to={`/sites/${doc.siteId}/documents`} className="underline">Documents</Link> / {stateLabels[doc.state].toLowerCase()}</p>
         <h2 id="document-title" className="text-xl font-semibold">{kindLabels[doc.kind]}, version {doc.version}</h2>
-        <p className="text-sm text-graphite-600">From the assessment <Link className="link" to={`/sites/${doc.siteId}/assessments/${doc.assessmentId}`}>frozen for it</Link>.</p>
+        <p className="text-sm text-graphite-600">
+          From the assessment{" "}
+          <Link className="link" to={`/sites/${doc.siteId}/assessments/${doc.assessmentId}`}>
+            {loaderData.assessment?.name ?? "it was drawn from"}
+          </Link>
+          {loaderData.assessment ? <>, frozen <DateText value={loaderData.assessment.createdAt} /></> : null}.
+        </p>
       </div>
       {doc.renderStatus === "failed" ? <Notice state="danger" role="alert">The PDF could not be made: {doc.renderError}. It will not be tried again by itself; reissue or ask an administrator.</Notice> : null}
       {doc.state === "withdrawn" ? <Notice state="danger">Withdrawn: {doc.withdrawnReason}</Notice> : null}

@@ -33,7 +33,7 @@ export async function loader({ request, params, context }: Route.LoaderArgs) {
   return {
     siteId: site.id,
     canDraft: canEditInventory(member.role),
-    documents: docs.map((d) => ({ id: d.id, kind: d.kind, version: d.version, state: d.state, renderStatus: d.renderStatus, authorName: d.authorName, reviewerName: d.reviewerName, createdAt: d.createdAt.toISOString(), issuedAt: d.issuedAt?.toISOString() ?? null })),
+    documents: docs.map((d) => ({ id: d.id, assessmentId: d.assessmentId, assessmentName: assessments.find((a) => a.id === d.assessmentId)?.name ?? "—", kind: d.kind, version: d.version, state: d.state, renderStatus: d.renderStatus, authorName: d.authorName, reviewerName: d.reviewerName, createdAt: d.createdAt.toISOString(), issuedAt: d.issuedAt?.toISOString() ?? null })),
     assessments: assessments.map((a) => ({ id: a.id, label: `${a.name} (${a.createdAt.toISOString().slice(0, 10)})` })),
   };
 }
@@ -58,6 +58,7 @@ export default function SiteDocuments({ loaderData, actionData }: Route.Componen
   useRenderRefresh(documents.some((d) => d.renderStatus === "queued" || d.renderStatus === "rendering"));
   const columns = [
     column.accessor("kind", { header: "Document", cell: (c) => <Link to={`/sites/${siteId}/documents/${c.row.original.id}`} className="link font-medium">{kindLabels[c.getValue()]}, version {c.row.original.version}</Link> }),
+    column.accessor("assessmentName", { header: "From the assessment", cell: (c) => <Link to={`/sites/${siteId}/assessments/${c.row.original.assessmentId}`} className="break-words hover:underline">{c.getValue()}</Link> }),
     column.accessor("state", { header: "State", cell: (c) => stateLabels[c.getValue()] }),
     column.accessor("renderStatus", { header: "PDF", cell: (c) => renderLabels[c.getValue()] }),
     column.accessor("authorName", { header: "Author", cell: (c) => <span className="break-words">{c.getValue()}</span> }),

@@ -2,6 +2,7 @@ import { useState } from "react";
 import { readFormData } from "~/lib/form.server";
 import { Form, Link, useSearchParams, type ShouldRevalidateFunction } from "react-router";
 import { Button, ButtonLink } from "~/components/button";
+import { RfCautions } from "~/components/cautions";
 import { Dialog } from "~/components/dialog";
 import { FormErrors } from "~/components/field";
 import { Card } from "~/components/panels";
@@ -114,6 +115,8 @@ export default function VisitPage({ loaderData, actionData }: Route.ComponentPro
           ) : null}
         </div>
       </Card>
+      {/* Readings are exposure results: the cautions of DESIGN.md §5 go with them. */}
+      {readings.length ? <RfCautions /> : null}
       <Dialog open={confirm} onClose={() => setConfirm(false)} title="Delete this visit?">
         <p className="text-sm text-graphite-600">
           The visit of {formatDate(visit.visitedOn)} is removed with its {photos.length} photo{photos.length === 1 ? "" : "s"} and {readings.length} reading{readings.length === 1 ? "" : "s"}. History keeps a record of it.
