@@ -1,5 +1,6 @@
 // The maps' colour scale: total % of limit on a log axis from 1 % to 1000 %, through viridis
-// (d3-scale-chromatic), the perceptual, colour-blind-safe scale the portal's maps use.
+// (d3-scale-chromatic), the perceptual, colour-blind-safe scale the portal's maps use, reversed as
+// on the web (features/exposure/colour-scale.ts): light yellow for little, dark purple for most.
 import { interpolateViridis } from "d3-scale-chromatic";
 
 export const SCALE_MIN_PERCENT = 1;
@@ -21,7 +22,7 @@ export function colourOf(percent: number): string {
   const q = Math.round(scalePosition(percent) * steps);
   let hex = cache.get(q);
   if (!hex) {
-    const c = interpolateViridis(q / steps);
+    const c = interpolateViridis(1 - q / steps);
     hex = c.startsWith("#") ? c : `#${c.match(/\d+/g)!.map((v) => Number(v).toString(16).padStart(2, "0")).join("")}`;
     cache.set(q, hex);
   }

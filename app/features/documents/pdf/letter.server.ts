@@ -45,7 +45,7 @@ export async function renderLetter(src: DocumentSource): Promise<Buffer> {
     const w = 250;
     const h = 180;
     drawLevelMap(doc, { grid: { x0: g.x0, y0: g.y0, step: g.step, nx: g.nx, ny: g.ny, percent: g.percent, mask: g.mask }, polygon: surface.polygon, obstructions: [], emitters: [], worst: null, signs: a.mitigation.signs.filter((s) => s.surfaceId === level.surfaceId) }, { x: PAGE.margin, y, w, h }, { levels: [100], key: "triangles: signs" });
-    say(doc, `${level.name}, seen from above with north up. Inside the white line exposure is over the limit for the public: a no-go area unless you are authorised and the operators have powered down. Brighter colours mean stronger exposure.`, { x: PAGE.margin + w + 16, y: y + 10, size: 8.5, width: contentWidth - w - 16 });
+    say(doc, `${level.name}, seen from above with north up. Inside the white line exposure is over the limit for the public: a no-go area unless you are authorised and the operators have powered down. Darker colours mean stronger exposure.`, { x: PAGE.margin + w + 16, y: y + 10, size: 8.5, width: contentWidth - w - 16 });
     doc.x = PAGE.margin;
     doc.y = y + h + 4;
   }
