@@ -5,6 +5,7 @@ import { db, schema, type Tx } from "~/infra/db.server";
 import { auditChange, type Actor } from "~/lib/audit.server";
 import { DomainError, staleEdit } from "~/lib/domain-error";
 import { likePattern, type Paging } from "~/lib/paging";
+import { oncePerRequest } from "~/lib/request-memo.server";
 import { changedFields, snapshot } from "~/lib/snapshot";
 import type { SiteKind } from "./kinds";
 import type { SiteInput, SitePatch } from "./schemas";
@@ -109,6 +110,14 @@ export async function findSite(scope: Scope, siteId: string) {
       ? await db.select({ site, clientName: client.name }).from(site).leftJoin(client, eq(client.id, site.clientId)).where(and(siteScope(scope), eq(site.id, siteId)))
       : await siteById.execute({ organizationId: scope.organizationId, siteId });
   return row ? { ...row.site, clientName: row.clientName } : null;
+}
+
+/**
+ * findSite, asked once per request: a site page's parent loader (routes/sites/site.tsx) and its
+ * section's loader share one query. For loaders only (see lib/request-memo.server.ts).
+ */
+export function findSiteForRequest(args: { request: Request; context?: unknown }, scope: Scope, siteId: string) {
+  return oncePerRequest(args, `site:${scope.organizationId}:${scope.role}:${scope.clientId ?? ""}:${siteId}`, () => findSite(scope, siteId));
 }
 
 export async function requireSite(scope: Scope, siteId: string) {
