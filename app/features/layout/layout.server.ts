@@ -20,19 +20,22 @@ type Who = Actor & Scope;
 // array in its stored order, read back through the same record mappers as the rows were. Numbers
 // survive the trip exactly (PostgreSQL 12+ prints double precision in its shortest exact form);
 // none of the fields the mappers keep is a date.
+// Written out with its table: inside a select list Drizzle prints a column bare ("id"), which the
+// subqueries would take for their own row's id.
+const siteOfRow = sql.raw('"site"."id"');
 const layoutColumn = sql<string>`json_build_array(
   (select coalesce(json_agg(json_build_object('id', s.id, 'name', s.name, 'kind', s.kind, 'polygon', s.polygon, 'line', s.line,
       'elevationM', s.elevation_m, 'bottomM', s.bottom_m, 'topM', s.top_m, 'access', s.access) order by s.position, s.created_at), '[]')
-    from ${surface} s where s.site_id = ${site.id}),
+    from ${surface} s where s.site_id = ${siteOfRow}),
   (select coalesce(json_agg(json_build_object('id', o.id, 'name', o.name, 'polygon', o.polygon, 'baseM', o.base_m, 'heightM', o.height_m)
       order by o.position, o.created_at), '[]')
-    from ${obstruction} o where o.site_id = ${site.id}),
+    from ${obstruction} o where o.site_id = ${siteOfRow}),
   (select coalesce(json_agg(json_build_object('id', a.id, 'name', a.name, 'kind', a.kind, 'x', a.x, 'y', a.y, 'z', a.z, 'locked', a.locked)
       order by a.position, a.created_at), '[]')
-    from ${accessPoint} a where a.site_id = ${site.id}),
+    from ${accessPoint} a where a.site_id = ${siteOfRow}),
   (select json_build_object('fileId', b.file_id, 'widthPx', b.width_px, 'heightPx', b.height_px, 'p1', b.p1, 'p2', b.p2,
       'distanceM', b.distance_m, 'originX', b.origin_x, 'originY', b.origin_y, 'rotationDeg', b.rotation_deg, 'opacity', b.opacity)
-    from ${siteBackdrop} b where b.site_id = ${site.id})
+    from ${siteBackdrop} b where b.site_id = ${siteOfRow})
 )::text`;
 
 const layoutOf = (handle: typeof db | Tx) => handle.select({ layout: layoutColumn }).from(site);
