@@ -250,7 +250,9 @@ async function startApp(env) {
   } else {
     if (mode !== "test") run("npm", ["run", "-s", "build"], { cwd: root });
     const host = mode === "test" ? "127.0.0.1" : (process.env.HOST ?? "127.0.0.1");
-    const app = background("app", process.execPath, [server], { ...env, HOST: host, NODE_ENV: "production", BUILD_DIR: buildDir });
+    // A larger young generation: a signed-in page allocates a few MB, and fewer scavenges measured
+    // ~0.6–0.9 ms less server CPU per overview request (docs/decisions/0009).
+    const app = background("app", process.execPath, ["--max-semi-space-size=64", server], { ...env, HOST: host, NODE_ENV: "production", BUILD_DIR: buildDir });
     process.env.APP_PID = String(app.pid); // for `with-stack -- npm run bench:http` (server CPU per request)
   }
   await waitForHttp(`${env.APP_URL}/api/health`, "the app", 120);

@@ -3,12 +3,11 @@ import { RfCautions } from "~/components/cautions";
 import { Card, PageHeader } from "~/components/panels";
 import { TitleBlock } from "~/components/title-block";
 import { requireMember } from "~/features/auth/guard.server";
-import { teamCounts } from "~/features/members/members.server";
 import { AttentionCard } from "~/features/overview/attention-card";
 import { attentionFor } from "~/features/overview/attention.server";
+import { overviewCounts } from "~/features/overview/counts.server";
 import { guideFor } from "~/features/overview/guide";
 import { roleLabels, staffRoles } from "~/lib/roles";
-import { inventoryCounts } from "~/features/sites/counts.server";
 import { PORTAL_HOME } from "~/lib/portal-nav";
 import { redirect } from "react-router";
 import type { Route } from "./+types/overview";
@@ -20,9 +19,8 @@ export async function loader(args: Route.LoaderArgs) {
   // A landlord's home is the client portal.
   if (member.role === "client") throw redirect(PORTAL_HOME);
   const staff = (staffRoles as readonly string[]).includes(member.role);
-  const [team, inventory, attention] = await Promise.all([
-    member.role === "owner" ? teamCounts(member.organizationId) : null,
-    staff ? inventoryCounts(member.organizationId) : null,
+  const [{ team, inventory }, attention] = await Promise.all([
+    overviewCounts(member.role, member.organizationId, staff),
     attentionFor(member.role, { organizationId: member.organizationId, userId: member.user.id }),
   ]);
   return { name: member.user.name, role: member.role, organizationName: member.organizationName, team, inventory, attention };

@@ -79,6 +79,11 @@ describe("GET /api/v1/sites", () => {
     expect(got.body).toMatchObject({ total: 3, page: 2, pageSize: 2 });
     expect(got.body.sites).toHaveLength(1);
     expect(Object.keys(got.body.sites[0]).sort()).toEqual(["city", "clientId", "emitterCount", "id", "kind", "name", "updatedAt"]);
+    // A page past the end has no row to carry the total; it is still counted.
+    const past = await callApi(sitesApi, "GET", "/api/v1/sites?page=5&pageSize=2&q=Paging", { auth: { token } });
+    expect(past.body).toMatchObject({ total: 3, page: 5, sites: [] });
+    const none = await callApi(sitesApi, "GET", "/api/v1/sites?q=No such site anywhere", { auth: { token } });
+    expect(none.body).toMatchObject({ total: 0, sites: [] });
   });
 
   it("searches name, city and address, ignoring case, with % and _ taken literally", async () => {

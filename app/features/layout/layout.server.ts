@@ -2,7 +2,7 @@
 // are updated in place (so readings and, later, assessments that point at a surface keep pointing
 // at it), rows without one are added, rows left out are removed; each change is an audit event
 // in the same transaction. The site's version guards against saving over someone else's edit.
-import { and, asc, eq, inArray } from "drizzle-orm";
+import { and, eq, inArray, sql } from "drizzle-orm";
 import { lockSite } from "~/features/sites/sites.server";
 import type { Scope } from "~/features/sites/scope.server";
 import { db, schema, type Tx } from "~/infra/db.server";
@@ -10,20 +10,44 @@ import { auditChanges, type Actor, type RecordChange } from "~/lib/audit.server"
 import { DomainError } from "~/lib/domain-error";
 import { changedFields, snapshot } from "~/lib/snapshot";
 import { issuesByPath, validateLayout } from "./geometry";
-import { accessPointJson, backdropJson, obstructionJson, surfaceJson, type LayoutJson } from "./json";
+import { accessPointJson, backdropJson, obstructionJson, surfaceJson, type AccessPointFields, type BackdropFields, type LayoutJson, type ObstructionFields, type SurfaceFields } from "./json";
 import { duplicateIds, type LayoutInput } from "./schemas";
 
 const { surface, obstruction, accessPoint, siteBackdrop, site } = schema;
 type Who = Actor & Scope;
 
+// The layout's four lists in one statement (one round trip instead of four): each list as a JSON
+// array in its stored order, read back through the same record mappers as the rows were. Numbers
+// survive the trip exactly (PostgreSQL 12+ prints double precision in its shortest exact form);
+// none of the fields the mappers keep is a date.
+// Written out with its table: inside a select list Drizzle prints a column bare ("id"), which the
+// subqueries would take for their own row's id.
+const siteOfRow = sql.raw('"site"."id"');
+const layoutColumn = sql<string>`json_build_array(
+  (select coalesce(json_agg(json_build_object('id', s.id, 'name', s.name, 'kind', s.kind, 'polygon', s.polygon, 'line', s.line,
+      'elevationM', s.elevation_m, 'bottomM', s.bottom_m, 'topM', s.top_m, 'access', s.access) order by s.position, s.created_at), '[]')
+    from ${surface} s where s.site_id = ${siteOfRow}),
+  (select coalesce(json_agg(json_build_object('id', o.id, 'name', o.name, 'polygon', o.polygon, 'baseM', o.base_m, 'heightM', o.height_m)
+      order by o.position, o.created_at), '[]')
+    from ${obstruction} o where o.site_id = ${siteOfRow}),
+  (select coalesce(json_agg(json_build_object('id', a.id, 'name', a.name, 'kind', a.kind, 'x', a.x, 'y', a.y, 'z', a.z, 'locked', a.locked)
+      order by a.position, a.created_at), '[]')
+    from ${accessPoint} a where a.site_id = ${siteOfRow}),
+  (select json_build_object('fileId', b.file_id, 'widthPx', b.width_px, 'heightPx', b.height_px, 'p1', b.p1, 'p2', b.p2,
+      'distanceM', b.distance_m, 'originX', b.origin_x, 'originY', b.origin_y, 'rotationDeg', b.rotation_deg, 'opacity', b.opacity)
+    from ${siteBackdrop} b where b.site_id = ${siteOfRow})
+)::text`;
+
+const layoutOf = (handle: typeof db | Tx) => handle.select({ layout: layoutColumn }).from(site);
+/** Prepared once: every Layout section and the layout API read it. */
+const layoutBySite = layoutOf(db).where(eq(site.id, sql.placeholder("siteId"))).prepare("layout_by_site");
+
+type LayoutLists = [SurfaceFields[], ObstructionFields[], AccessPointFields[], BackdropFields | null];
+
 /** The layout of a site already known to be in scope, with the site's version. */
 export async function readLayout(siteId: string, version: number, handle: typeof db | Tx = db): Promise<LayoutJson> {
-  const [surfaces, obstructions, accessPoints, [backdrop]] = await Promise.all([
-    handle.select().from(surface).where(eq(surface.siteId, siteId)).orderBy(asc(surface.position), asc(surface.createdAt)),
-    handle.select().from(obstruction).where(eq(obstruction.siteId, siteId)).orderBy(asc(obstruction.position), asc(obstruction.createdAt)),
-    handle.select().from(accessPoint).where(eq(accessPoint.siteId, siteId)).orderBy(asc(accessPoint.position), asc(accessPoint.createdAt)),
-    handle.select().from(siteBackdrop).where(eq(siteBackdrop.siteId, siteId)),
-  ]);
+  const [row] = handle === db ? await layoutBySite.execute({ siteId }) : await layoutOf(handle).where(eq(site.id, siteId));
+  const [surfaces, obstructions, accessPoints, backdrop]: LayoutLists = row ? JSON.parse(row.layout) : [[], [], [], null];
   return {
     version,
     surfaces: surfaces.map(surfaceJson),

@@ -1,5 +1,5 @@
 // Members of an organisation: list, count, change role, remove. Every write in one transaction with its audit event.
-import { and, asc, eq, sql } from "drizzle-orm";
+import { and, asc, eq, sql, type Placeholder, type SQL } from "drizzle-orm";
 import { db, schema, type Tx } from "~/infra/db.server";
 import { audit, type Actor } from "~/lib/audit.server";
 import { DomainError } from "~/lib/domain-error";
@@ -18,15 +18,20 @@ export async function listMembers(organizationId: string) {
     .orderBy(asc(user.name));
 }
 
+/**
+ * Member and waiting-invitation counts as select columns, for a statement over one organisation
+ * row whose id is the given parameter: the overview asks them with other counts in one round trip
+ * (features/overview/counts.server.ts).
+ */
+export function teamCountColumns(organizationId: SQL | Placeholder) {
+  return {
+    members: sql<number>`(select count(*)::int from ${member} where ${member.organizationId} = ${organizationId})`,
+    pending: sql<number>`(select count(*)::int from ${invitation} where ${invitation.organizationId} = ${organizationId} and ${invitation.status} = 'pending' and ${invitation.expiresAt} > now())`,
+  };
+}
+
 /** Member and waiting-invitation counts for the owner's overview: one round trip, built once. */
-const teamCountsQuery = db
-  .select({
-    members: sql<number>`count(*)::int`,
-    pending: sql<number>`(select count(*)::int from ${invitation} where ${invitation.organizationId} = ${sql.placeholder("organizationId")} and ${invitation.status} = 'pending' and ${invitation.expiresAt} > now())`,
-  })
-  .from(member)
-  .where(eq(member.organizationId, sql.placeholder("organizationId")))
-  .prepare("team_counts");
+const teamCountsQuery = db.select(teamCountColumns(sql.placeholder("organizationId"))).from(schema.organization).where(eq(schema.organization.id, sql.placeholder("organizationId"))).prepare("team_counts");
 
 export async function teamCounts(organizationId: string) {
   const [row] = await teamCountsQuery.execute({ organizationId });

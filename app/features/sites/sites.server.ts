@@ -5,6 +5,7 @@ import { db, schema, type Tx } from "~/infra/db.server";
 import { auditChange, type Actor } from "~/lib/audit.server";
 import { DomainError, staleEdit } from "~/lib/domain-error";
 import { likePattern, type Paging } from "~/lib/paging";
+import { oncePerRequest } from "~/lib/request-memo.server";
 import { changedFields, snapshot } from "~/lib/snapshot";
 import type { SiteKind } from "./kinds";
 import type { SiteInput, SitePatch } from "./schemas";
@@ -45,7 +46,20 @@ function pageStatement(shape: ListShape, name: string) {
   // directions (read backwards for desc): emitter counts tie on most sites.
   const by = shape.dir === "desc" ? desc : asc;
   return db
-    .select({ id: site.id, name: site.name, kind: site.kind, city: site.city, clientId: site.clientId, clientName: client.name, emitterCount: site.emitterCount, updatedAt: site.updatedAt })
+    .select({
+      id: site.id,
+      name: site.name,
+      kind: site.kind,
+      city: site.city,
+      clientId: site.clientId,
+      clientName: client.name,
+      emitterCount: site.emitterCount,
+      updatedAt: site.updatedAt,
+      // The total as an uncorrelated subquery, counted once (an InitPlan) by the organisation's
+      // indexes like the count statement, in the same round trip; a page past the end has no row
+      // to carry it, and then the count statement is asked.
+      total: sql<number>`(select count(*)::int from ${site} where ${listWhere(shape)})`,
+    })
     .from(site)
     .leftJoin(client, eq(client.id, site.clientId))
     .where(listWhere(shape))
@@ -88,10 +102,14 @@ export async function listSites(scope: Scope, filter: SiteFilter) {
     ...(filter.clientId ? { clientId: filter.clientId } : {}),
   };
   const offset = (filter.page - 1) * filter.pageSize;
-  // The page and the count as two queries at once: each can use the organisation's indexes,
-  // where a window count over the page would read every matching row first.
-  const [rows, [counted]] = await Promise.all([page.execute({ ...values, limit: filter.pageSize, offset }), count.execute(values)]);
-  return { sites: rows, total: counted?.n ?? 0 };
+  // The page with the total in one statement (a window count over the page would read every
+  // matching row first; the subquery counts by the organisation's indexes, as the count statement does).
+  const rows = await page.execute({ ...values, limit: filter.pageSize, offset });
+  if (rows.length === 0) {
+    const [counted] = offset > 0 ? await count.execute(values) : [{ n: 0 }];
+    return { sites: [], total: counted?.n ?? 0 };
+  }
+  return { sites: rows.map(({ total: _total, ...row }) => row), total: rows[0].total };
 }
 
 /** A site of an organisation by id, prepared once (every site page asks it). */
@@ -109,6 +127,14 @@ export async function findSite(scope: Scope, siteId: string) {
       ? await db.select({ site, clientName: client.name }).from(site).leftJoin(client, eq(client.id, site.clientId)).where(and(siteScope(scope), eq(site.id, siteId)))
       : await siteById.execute({ organizationId: scope.organizationId, siteId });
   return row ? { ...row.site, clientName: row.clientName } : null;
+}
+
+/**
+ * findSite, asked once per request: a site page's parent loader (routes/sites/site.tsx) and its
+ * section's loader share one query. For loaders only (see lib/request-memo.server.ts).
+ */
+export function findSiteForRequest(args: { request: Request; context?: unknown }, scope: Scope, siteId: string) {
+  return oncePerRequest(args, `site:${scope.organizationId}:${scope.role}:${scope.clientId ?? ""}:${siteId}`, () => findSite(scope, siteId));
 }
 
 export async function requireSite(scope: Scope, siteId: string) {

@@ -11,7 +11,7 @@ import { freezeFormSchema } from "~/features/assessments/schemas";
 import { requireMember } from "~/features/auth/guard.server";
 import { standardLabels } from "~/features/exposure/options";
 import { actorOf, scopeOf } from "~/features/sites/scope.server";
-import { findSite } from "~/features/sites/sites.server";
+import { findSiteForRequest } from "~/features/sites/sites.server";
 import { redirectWithFlash } from "~/infra/flash.server";
 import { domainErrorReply } from "~/lib/domain-error";
 import { parseForm } from "~/lib/form.server";
@@ -24,7 +24,7 @@ export const meta: Route.MetaFunction = () => [{ title: "Assessments · Isotrope
 
 export async function loader({ request, params, context }: Route.LoaderArgs) {
   const member = await requireMember({ request, context }, { roles: staffRoles });
-  const site = found(await findSite(scopeOf(member), params.siteId), "No such site in your organisation.");
+  const site = found(await findSiteForRequest({ request, context }, scopeOf(member), params.siteId), "No such site in your organisation.");
   const rows = await listAssessments(site.id);
   return {
     siteId: site.id,

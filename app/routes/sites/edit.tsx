@@ -5,7 +5,7 @@ import { clientOptions } from "~/features/clients/clients.server";
 import { siteFormSchema } from "~/features/sites/schemas";
 import { SiteForm } from "~/features/sites/site-form";
 import { actorOf, scopeOf } from "~/features/sites/scope.server";
-import { findSite, updateSite } from "~/features/sites/sites.server";
+import { findSiteForRequest, updateSite } from "~/features/sites/sites.server";
 import { redirectWithFlash } from "~/infra/flash.server";
 import { domainErrorReply } from "~/lib/domain-error";
 import { found } from "~/lib/responses.server";
@@ -15,7 +15,7 @@ import type { Route } from "./+types/edit";
 export async function loader({ request, params, context }: Route.LoaderArgs) {
   const member = await requireMember({ request, context }, { roles: inventoryEditors });
   const scope = scopeOf(member);
-  const site = found(await findSite(scope, params.siteId), "No such site in your organisation.");
+  const site = found(await findSiteForRequest({ request, context }, scope, params.siteId), "No such site in your organisation.");
   return { site, clients: await clientOptions(scope) };
 }
 

@@ -12,7 +12,7 @@ import { emittersSection } from "~/features/emitters/section.server";
 import { SitePlan } from "~/features/layout/site-plan";
 import type { XY } from "~/features/layout/plan-frame";
 import { scopeOf } from "~/features/sites/scope.server";
-import { findSite } from "~/features/sites/sites.server";
+import { findSite, findSiteForRequest } from "~/features/sites/sites.server";
 import { found } from "~/lib/responses.server";
 import { canEditInventory, inventoryEditors, staffRoles } from "~/lib/roles";
 import type { Route } from "./+types/emitters";
@@ -21,7 +21,7 @@ export const meta: Route.MetaFunction = () => [{ title: "Emitters · Isotrope" }
 
 export async function loader({ request, params, context }: Route.LoaderArgs) {
   const member = await requireMember({ request, context }, { roles: staffRoles });
-  const site = found(await findSite(scopeOf(member), params.siteId), "No such site in your organisation.");
+  const site = found(await findSiteForRequest({ request, context }, scopeOf(member), params.siteId), "No such site in your organisation.");
   return { siteId: site.id, siteName: site.name, canEdit: canEditInventory(member.role), ...(await emittersSection(member.organizationId, site.id)) };
 }
 

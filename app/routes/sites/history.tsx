@@ -2,14 +2,14 @@ import { requireMember } from "~/features/auth/guard.server";
 import { HistoryList } from "~/features/history/history-list";
 import { referencedNames, siteHistory } from "~/features/history/history.server";
 import { scopeOf } from "~/features/sites/scope.server";
-import { findSite } from "~/features/sites/sites.server";
+import { findSiteForRequest } from "~/features/sites/sites.server";
 import { found } from "~/lib/responses.server";
 import { staffRoles } from "~/lib/roles";
 import type { Route } from "./+types/history";
 
 export async function loader({ request, params, context }: Route.LoaderArgs) {
   const member = await requireMember({ request, context }, { roles: staffRoles });
-  const site = found(await findSite(scopeOf(member), params.siteId), "No such site in your organisation.");
+  const site = found(await findSiteForRequest({ request, context }, scopeOf(member), params.siteId), "No such site in your organisation.");
   const events = await siteHistory(member.organizationId, site.id);
   return { events, names: await referencedNames(member.organizationId, events) };
 }

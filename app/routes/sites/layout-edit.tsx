@@ -4,7 +4,7 @@ import { requireMember } from "~/features/auth/guard.server";
 import { LayoutEditor } from "~/features/layout/layout-editor";
 import { readLayout } from "~/features/layout/layout.server";
 import { scopeOf } from "~/features/sites/scope.server";
-import { findSite } from "~/features/sites/sites.server";
+import { findSiteForRequest } from "~/features/sites/sites.server";
 import { found } from "~/lib/responses.server";
 import { inventoryEditors } from "~/lib/roles";
 import type { Route } from "./+types/layout-edit";
@@ -13,7 +13,7 @@ export const meta: Route.MetaFunction = ({ data }) => [{ title: data ? `Edit lay
 
 export async function loader({ request, params, context }: Route.LoaderArgs) {
   const member = await requireMember({ request, context }, { roles: inventoryEditors });
-  const site = found(await findSite(scopeOf(member), params.siteId), "No such site in your organisation.");
+  const site = found(await findSiteForRequest({ request, context }, scopeOf(member), params.siteId), "No such site in your organisation.");
   return { siteId: site.id, siteName: site.name, layout: await readLayout(site.id, site.version) };
 }
 

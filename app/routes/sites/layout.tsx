@@ -6,7 +6,7 @@ import { SitePlan } from "~/features/layout/site-plan";
 import { EmitterLayer, OperatorLegend } from "~/features/emitters/emitter-layer";
 import { planEmitters } from "~/features/emitters/section.server";
 import { scopeOf } from "~/features/sites/scope.server";
-import { findSite } from "~/features/sites/sites.server";
+import { findSiteForRequest } from "~/features/sites/sites.server";
 import { ButtonLink } from "~/components/button";
 import { found } from "~/lib/responses.server";
 import { canEditInventory, staffRoles } from "~/lib/roles";
@@ -14,7 +14,7 @@ import type { Route } from "./+types/layout";
 
 export async function loader({ request, params, context }: Route.LoaderArgs) {
   const member = await requireMember({ request, context }, { roles: staffRoles });
-  const site = found(await findSite(scopeOf(member), params.siteId), "No such site in your organisation.");
+  const site = found(await findSiteForRequest({ request, context }, scopeOf(member), params.siteId), "No such site in your organisation.");
   const [layout, emitters] = await Promise.all([readLayout(site.id, site.version), planEmitters(site.id)]);
   return { siteId: site.id, siteName: site.name, ...layout, emitters, canEdit: canEditInventory(member.role) };
 }

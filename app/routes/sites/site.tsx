@@ -2,7 +2,7 @@ import { Link, NavLink, Outlet, useLocation } from "react-router";
 import { requireMember } from "~/features/auth/guard.server";
 import { siteKindLabels, type SiteKind } from "~/features/sites/kinds";
 import { scopeOf } from "~/features/sites/scope.server";
-import { findSite } from "~/features/sites/sites.server";
+import { findSiteForRequest } from "~/features/sites/sites.server";
 import { canEditInventory, staffRoles } from "~/lib/roles";
 import { found } from "~/lib/responses.server";
 import type { Route } from "./+types/site";
@@ -11,7 +11,7 @@ export const meta: Route.MetaFunction = ({ data }) => [{ title: data ? `${data.s
 
 export async function loader({ request, params, context }: Route.LoaderArgs) {
   const member = await requireMember({ request, context }, { roles: staffRoles });
-  const site = found(await findSite(scopeOf(member), params.siteId), "No such site in your organisation.");
+  const site = found(await findSiteForRequest({ request, context }, scopeOf(member), params.siteId), "No such site in your organisation.");
   return {
     site: { id: site.id, name: site.name, kind: site.kind as SiteKind, address: site.address, city: site.city, clientId: site.clientId, clientName: site.clientName, datumNote: site.datumNote, accessNotes: site.accessNotes },
     canEdit: canEditInventory(member.role),

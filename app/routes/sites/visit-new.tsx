@@ -2,7 +2,7 @@ import { parseForm } from "~/lib/form.server";
 import { data } from "react-router";
 import { requireMember } from "~/features/auth/guard.server";
 import { actorOf, scopeOf } from "~/features/sites/scope.server";
-import { findSite } from "~/features/sites/sites.server";
+import { findSiteForRequest } from "~/features/sites/sites.server";
 import { visitFormSchema } from "~/features/visits/schemas";
 import { VisitForm } from "~/features/visits/visit-form";
 import { createVisit } from "~/features/visits/visits.server";
@@ -14,9 +14,9 @@ import type { Route } from "./+types/visit-new";
 
 export const meta: Route.MetaFunction = () => [{ title: "New visit · Isotrope" }];
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const member = await requireMember(request, { roles: inventoryEditors });
-  const site = found(await findSite(scopeOf(member), params.siteId), "No such site in your organisation.");
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const member = await requireMember({ request, context }, { roles: inventoryEditors });
+  const site = found(await findSiteForRequest({ request, context }, scopeOf(member), params.siteId), "No such site in your organisation.");
   return { siteId: site.id, today: new Date().toISOString().slice(0, 10) };
 }
 

@@ -4,7 +4,7 @@ import { ButtonLink } from "~/components/button";
 import { TableShell } from "~/components/table-shell";
 import { requireMember } from "~/features/auth/guard.server";
 import { scopeOf } from "~/features/sites/scope.server";
-import { findSite } from "~/features/sites/sites.server";
+import { findSiteForRequest } from "~/features/sites/sites.server";
 import { calibrationWarnings } from "~/features/visits/calibration";
 import { listVisits } from "~/features/visits/visits.server";
 import { formatDate } from "~/lib/dates";
@@ -12,9 +12,9 @@ import { found } from "~/lib/responses.server";
 import { canEditInventory, staffRoles } from "~/lib/roles";
 import type { Route } from "./+types/visits";
 
-export async function loader({ request, params }: Route.LoaderArgs) {
-  const member = await requireMember(request, { roles: staffRoles });
-  const site = found(await findSite(scopeOf(member), params.siteId), "No such site in your organisation.");
+export async function loader({ request, params, context }: Route.LoaderArgs) {
+  const member = await requireMember({ request, context }, { roles: staffRoles });
+  const site = found(await findSiteForRequest({ request, context }, scopeOf(member), params.siteId), "No such site in your organisation.");
   const rows = await listVisits(site.id);
   return {
     siteId: site.id,
