@@ -40,7 +40,7 @@ export default function AppLayout({ loaderData }: Route.ComponentProps) {
           <NavLink to="/" className="-mx-1 my-2 px-1 py-1" aria-label="Isotrope, overview">
             <Wordmark />
           </NavLink>
-          <nav aria-label="Main" className="order-last -mx-3 w-[calc(100%+1.5rem)] overflow-x-auto border-t border-rule sm:order-none sm:mx-0 sm:w-auto sm:flex-1 sm:border-t-0">
+          <nav aria-label="Main" className="scroll-hint order-last -mx-3 w-[calc(100%+1.5rem)] overflow-x-auto border-t border-rule sm:order-none sm:mx-0 sm:w-auto sm:flex-1 sm:border-t-0">
             <ul className="flex">
               {(role ? sectionsFor(role) : []).map((s) => (
                 <li key={s.path}>
