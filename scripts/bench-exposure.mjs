@@ -10,6 +10,7 @@
 import { execFileSync } from "node:child_process";
 import { cpus, loadavg } from "node:os";
 import { chromium } from "playwright-core";
+import { demoExposureUrl } from "./bench-support.mjs";
 
 const base = process.env.APP_URL ?? "http://127.0.0.1:3100";
 const runs = Number(process.argv[2] ?? 8);
@@ -27,15 +28,7 @@ const browser = await chromium.launch({
   args: ["--no-sandbox", "--disable-gpu", "--enable-unsafe-swiftshader", "--use-angle=swiftshader"],
 });
 const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-await page.goto(`${base}/sign-in`);
-await page.locator("html[data-hydrated]").waitFor({ state: "attached" });
-await page.getByLabel("E-mail").fill("engineer@demo.isotrope.test");
-await page.getByLabel("Password").fill(process.env.DEMO_PASSWORD ?? "isotrope-demo");
-await page.getByRole("button", { name: "Sign in" }).click();
-await page.getByRole("button", { name: "Sign out" }).waitFor();
-await page.goto(`${base}/sites`);
-const href = await page.getByRole("link", { name: "Calloway House" }).first().getAttribute("href");
-const url = `${base}${href}/exposure`;
+const url = await demoExposureUrl(page, base);
 
 // 1. The loader: the computation's own time (measured in the loader) and the document's time to first byte.
 const compute = [];

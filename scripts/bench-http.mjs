@@ -5,8 +5,8 @@
 //   npm run -s bench:http -- [base URL]      BENCH_SECONDS=10 BENCH_ROUNDS=3 BENCH_CONNECTIONS=10
 // With APP_PID (set by `with-stack` when it starts the app) it also prints the server's CPU time
 // per request, read from /proc: a figure that a busy machine disturbs far less than requests/s.
-import { readFileSync } from "node:fs";
 import autocannon from "autocannon";
+import { appPid, serverCpuMs } from "./bench-support.mjs";
 
 const base = (process.argv[2] ?? process.env.BENCH_URL ?? "http://127.0.0.1:3000").replace(/\/$/, "");
 const seconds = Number(process.env.BENCH_SECONDS ?? 10);
@@ -35,17 +35,6 @@ function run(path, headers, duration) {
   });
 }
 
-const appPid = process.env.APP_PID;
-/** The server process's user + system CPU time in ms (Linux), or null. */
-function serverCpuMs() {
-  if (!appPid) return null;
-  try {
-    const fields = readFileSync(`/proc/${appPid}/stat`, "utf8").split(") ")[1].split(" ");
-    return (Number(fields[11]) + Number(fields[12])) * 10; // clock ticks of 10 ms
-  } catch {
-    return null;
-  }
-}
 
 const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 

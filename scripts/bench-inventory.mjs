@@ -12,9 +12,9 @@
 // JSON, and keeps the bench organisation (for profiling by hand; the test stack's database is rebuilt
 // by the next `npm test`).
 import { createHash, createHmac, randomBytes, randomUUID } from "node:crypto";
-import { readFileSync } from "node:fs";
 import autocannon from "autocannon";
 import postgres from "postgres";
+import { serverCpuMs } from "./bench-support.mjs";
 
 const base = (process.env.APP_URL ?? "http://127.0.0.1:3100").replace(/\/$/, "");
 const seconds = Number(process.env.BENCH_SECONDS ?? 10);
@@ -66,17 +66,6 @@ async function seed() {
   return { org, cookie: `better-auth.session_token=${encodeURIComponent(`${token}.${signature}`)}`, apiToken, siteId: sixty.id };
 }
 
-const appPid = process.env.APP_PID;
-/** The server process's user + system CPU time in ms (Linux, APP_PID set by `with-stack`), or null. */
-function serverCpuMs() {
-  if (!appPid) return null;
-  try {
-    const fields = readFileSync(`/proc/${appPid}/stat`, "utf8").split(") ")[1].split(" ");
-    return (Number(fields[11]) + Number(fields[12])) * 10; // clock ticks of 10 ms
-  } catch {
-    return null;
-  }
-}
 
 /** One autocannon run that keeps every response time, for exact percentiles. */
 function measure(name, path, headers) {

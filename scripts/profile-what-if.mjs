@@ -2,20 +2,13 @@
 // functions with the most self time. Needs the built app and the seeded stack, as bench-exposure.mjs:
 //   WITH_APP=1 npm run -s with-stack -- node scripts/profile-what-if.mjs [edits]
 import { chromium } from "playwright-core";
+import { demoExposureUrl } from "./bench-support.mjs";
 
 const base = process.env.APP_URL ?? "http://127.0.0.1:3100";
 const edits = Number(process.argv[2] ?? 8);
 const browser = await chromium.launch({ executablePath: process.env.CHROMIUM ?? "/usr/bin/chromium", args: ["--no-sandbox", "--disable-gpu"] });
 const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-await page.goto(`${base}/sign-in`);
-await page.locator("html[data-hydrated]").waitFor({ state: "attached" });
-await page.getByLabel("E-mail").fill("engineer@demo.isotrope.test");
-await page.getByLabel("Password").fill(process.env.DEMO_PASSWORD ?? "isotrope-demo");
-await page.getByRole("button", { name: "Sign in" }).click();
-await page.getByRole("button", { name: "Sign out" }).waitFor();
-await page.goto(`${base}/sites`);
-const href = await page.getByRole("link", { name: "Calloway House" }).first().getAttribute("href");
-await page.goto(`${base}${href}/exposure`);
+await page.goto(await demoExposureUrl(page, base));
 await page.waitForFunction(() => !document.querySelector("[data-testid=what-if-state]")?.textContent?.includes("Preparing"), null, { timeout: 120_000 });
 const power = page.locator("[data-emitter-row='SM-3-2100'] input[id$='-power']");
 await power.fill("-1");
