@@ -275,10 +275,19 @@ async function start() {
 `);
 }
 
-function suite(name, command, args, env = {}) {
+/** Runs a command to its end without blocking this process, so the app's output keeps being
+ * forwarded meanwhile (a blocked pipe would stall the app's own writes to it). */
+function runInherit(command, args, env) {
+  return new Promise((resolve) => {
+    const child = spawn(command, args, { cwd: root, stdio: "inherit", env });
+    child.on("error", () => resolve(1));
+    child.on("exit", (code, signal) => resolve(code ?? (signal ? 1 : 0)));
+  });
+}
+
+async function suite(name, command, args, env = {}) {
   log(`── ${name}`);
-  const result = spawnSync(command, args, { cwd: root, stdio: "inherit", env: { ...process.env, ...env } });
-  return result.status === 0;
+  return (await runInherit(command, args, { ...process.env, ...env })) === 0;
 }
 
 function readJson(file) {
@@ -308,20 +317,20 @@ async function test() {
   const counts = { passed: 0, failed: 0 };
   let ok = true;
 
-  const typecheck = suite("typecheck", "npm", ["run", "-s", "typecheck"]);
+  const typecheck = await suite("typecheck", "npm", ["run", "-s", "typecheck"]);
   counts[typecheck ? "passed" : "failed"] += 1;
 
-  const vitestOk = suite("vitest (unit and integration)", bin("vitest"), ["run", "--reporter=default", "--reporter=json", `--outputFile=${join(out, "vitest.json")}`]);
+  const vitestOk = await suite("vitest (unit and integration)", bin("vitest"), ["run", "--reporter=default", "--reporter=json", `--outputFile=${join(out, "vitest.json")}`]);
   const vitest = readJson(join(out, "vitest.json"));
   counts.passed += vitest?.numPassedTests ?? 0;
   counts.failed += vitest ? vitest.numFailedTests : 1;
   ok &&= typecheck && vitestOk;
 
-  const build = suite("build", "npm", ["run", "-s", "build"]);
+  const build = await suite("build", "npm", ["run", "-s", "build"]);
   counts[build ? "passed" : "failed"] += 1;
   if (build) {
     await startApp({ ...env, SIGN_IN_LIMIT: "500" });
-    const e2eOk = suite("playwright (Chromium)", bin("playwright"), ["test", "-c", "tests/e2e/playwright.config.ts"], {
+    const e2eOk = await suite("playwright (Chromium)", bin("playwright"), ["test", "-c", "tests/e2e/playwright.config.ts"], {
       PLAYWRIGHT_JSON_OUTPUT_NAME: join(out, "playwright.json"),
       PLAYWRIGHT_SKIP_BROWSER_DOWNLOAD: "1",
     });
@@ -351,8 +360,7 @@ async function withServices() {
   const { env } = await services();
   if (withCommand.length === 0) fail("usage: node scripts/stack.mjs with -- COMMAND [ARGS]");
   if (process.env.WITH_APP) await startApp({ ...env, SIGN_IN_LIMIT: "500" });
-  const result = spawnSync(withCommand[0], withCommand.slice(1), { cwd: root, stdio: "inherit", env: process.env });
-  shutdown(result.status ?? 1);
+  shutdown(await runInherit(withCommand[0], withCommand.slice(1), process.env));
 }
 
 if (withCommand) await withServices();

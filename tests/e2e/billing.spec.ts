@@ -23,6 +23,21 @@ async function certificateCount() {
   }
 }
 
+/** Where a paid checkout stands (our rows and the fake's webhook deliveries): printed when the
+ * success page does not offer the download in time, so a failure says which step stopped. */
+async function paymentTrail(sessionId: string) {
+  const sql = postgres(process.env.DATABASE_URL!, { max: 1, onnotice: () => {} });
+  try {
+    const checkouts = await sql`select c.state, c.failure_message, c.document_id, d.render_status, d.render_attempts, d.render_error from checkout c left join document d on d.id = c.document_id where c.stripe_session_id = ${sessionId}`;
+    const jobs = await sql`select state, retry_count, created_on, started_on, completed_on, output from pgboss.job where name = 'document-render' order by created_on desc limit 5`.catch((e) => [String(e)]);
+    const events = await fetch(`${process.env.STRIPE_API_BASE}/_fake/events`).then((r) => r.json()).catch((e) => ({ data: String(e) }));
+    const ours = Array.isArray(events.data) ? events.data.filter((e: { event: { data: { object: { id?: string } } } }) => e.event.data.object.id === sessionId).map((e: { type: string; deliveries: unknown }) => ({ type: e.type, deliveries: e.deliveries })) : events.data;
+    return JSON.stringify({ checkouts, jobs, events: ours }, null, 1);
+  } finally {
+    await sql.end();
+  }
+}
+
 async function openCertificatePage(page: Page) {
   await visit(page, "/portal/certificates");
   const row = page.getByRole("row").filter({ hasText: ASSESSMENT });
@@ -52,7 +67,13 @@ test("the client buys a certificate and downloads it", async ({ page }, info) =>
   await page.getByRole("button", { name: "Pay with test card" }).click();
   await expect(page).toHaveURL(/\/certificate\/paid\?session_id=cs_/);
   const download = page.getByRole("link", { name: "Download the certificate (PDF)" });
-  await expect(download).toBeVisible({ timeout: 60_000 });
+  const sessionId = new URL(page.url()).searchParams.get("session_id")!;
+  try {
+    await expect(download).toBeVisible({ timeout: 60_000 });
+  } catch (error) {
+    console.log(`[billing] the payment's trail: ${await paymentTrail(sessionId)}`);
+    throw error;
+  }
   await shot(page, info, "certificate-paid");
   const href = await download.getAttribute("href");
   const pdf = await page.request.get(href!);
