@@ -3,8 +3,8 @@
 import { PassThrough, Writable } from "node:stream";
 import { createReadableStreamFromReadable } from "@react-router/node";
 import { renderToPipeableStream } from "react-dom/server";
-import type { EntryContext, RouterContextProvider } from "react-router";
-import { ServerRouter } from "react-router";
+import type { EntryContext, HandleErrorFunction, RouterContextProvider } from "react-router";
+import { isRouteErrorResponse, ServerRouter } from "react-router";
 import { contentSecurityPolicy, createNonce } from "~/infra/content-security-policy.server";
 
 // Deferred data may take this long (the Exposure page computing a large site on a busy machine).
@@ -12,6 +12,15 @@ export const streamTimeout = 60_000;
 
 // The background work (PDF rendering, e-mail), started by server/index.mjs unless WORKER=off.
 export { startBackgroundWork, stopBackgroundWork } from "~/features/documents/worker.server";
+
+// Logs what went wrong on the server. A request the router refused itself (a method a route does
+// not take, an unknown path: answered 405 or 404) and a request the client abandoned are not
+// faults, so they leave no stack trace in the log.
+export const handleError: HandleErrorFunction = (error, { request }) => {
+  if (request.signal.aborted) return;
+  if (isRouteErrorResponse(error) && error.status < 500) return;
+  console.error(error);
+};
 
 export default function handleRequest(
   request: Request,

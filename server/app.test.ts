@@ -1,6 +1,8 @@
 // The server's gate over real HTTP, with a stand-in for React Router that echoes what reached it.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { connect } from "node:net";
 import { createApp } from "./app.mjs";
+import { DRAIN_MAX_BYTES } from "./refuse.mjs";
 import { CLIENT_ADDRESS_HEADER } from "./client-address.mjs";
 import { CLIENT_ADDRESS_HEADER as APP_HEADER } from "../app/infra/client-address.server";
 import { listen, rawStatusLine, send } from "../tests/support/http";
@@ -110,6 +112,30 @@ describe("body gate", () => {
     const reply = await send(port, { method: "POST", path: "/sign-in", headers: form, body: "a=1&".repeat(40_000) });
     expect(reply.status).toBe(413);
     expect(seen.length).toBe(before);
+  });
+  it("drains a refused body, so its sender reads the 413 instead of a reset connection", async () => {
+    // The client sends the headers and waits for the answer, then sends the 800 kB it declared, then a
+    // second request on the same connection. Closing on unread bytes would reset the connection
+    // (EPIPE or ECONNRESET on the writes); drained, both answers arrive on one socket.
+    const body = "a=1&".repeat(200_000);
+    const answers = await new Promise<string>((resolve, reject) => {
+      const socket = connect(port, "127.0.0.1");
+      let got = "";
+      socket.on("error", reject);
+      socket.on("data", (d) => {
+        got += d.toString();
+        if (got.includes("413 Payload Too Large") && !got.includes("HTTP/1.1 200") && !socket.writableEnded) {
+          socket.write(body, () => socket.end(`GET /api/health-of-the-stand-in HTTP/1.1\r\nHost: 127.0.0.1\r\nConnection: close\r\n\r\n`));
+        }
+      });
+      socket.on("close", () => resolve(got));
+      socket.write(`POST /sign-in HTTP/1.1\r\nHost: 127.0.0.1\r\nContent-Type: application/x-www-form-urlencoded\r\nContent-Length: ${body.length}\r\n\r\n`);
+    });
+    expect(answers.match(/^HTTP\/1\.1 \d+/gm)).toEqual(["HTTP/1.1 413", "HTTP/1.1 200"]);
+  });
+  it("closes at once on a declared body beyond what it drains", async () => {
+    const declared = `POST /sign-in HTTP/1.1\r\nHost: 127.0.0.1\r\nContent-Type: application/x-www-form-urlencoded\r\nContent-Length: ${DRAIN_MAX_BYTES + 1}\r\n\r\n`;
+    expect(await rawStatusLine(port, declared)).toBe("HTTP/1.1 413 Payload Too Large");
   });
   it("cuts a chunked body off at the limit", async () => {
     const reply = await send(port, { method: "POST", path: "/sign-in", headers: form, chunks: Array(20).fill("a".repeat(8 * 1024)) });
