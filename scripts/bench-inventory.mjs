@@ -18,7 +18,10 @@ import { serverCpuMs } from "./bench-support.mjs";
 
 const base = (process.env.APP_URL ?? "http://127.0.0.1:3100").replace(/\/$/, "");
 const seconds = Number(process.env.BENCH_SECONDS ?? 10);
-const connections = Number(process.env.BENCH_CONNECTIONS ?? 20);
+const defaultConnections = Number(process.env.BENCH_CONNECTIONS ?? 20);
+// The site pages again at each of these connection counts (p95 at 20 connections on 2 cores is mostly
+// queueing: about 20 × the page's CPU time). BENCH_SWEEP="" skips the sweep.
+const sweep = (process.env.BENCH_SWEEP ?? "1,5,10").split(",").filter(Boolean).map(Number);
 const siteCount = Number(process.env.BENCH_SITES ?? 10_000);
 const emitterCount = Number(process.env.BENCH_EMITTERS ?? 200_000);
 const secret = process.env.BETTER_AUTH_SECRET;
@@ -68,7 +71,7 @@ async function seed() {
 
 
 /** One autocannon run that keeps every response time, for exact percentiles. */
-function measure(name, path, headers) {
+function measure(name, path, headers, connections = defaultConnections) {
   return new Promise((resolve, reject) => {
     const times = [];
     let bad = 0;
@@ -79,7 +82,7 @@ function measure(name, path, headers) {
       const at = (p) => times[Math.min(times.length - 1, Math.floor((p / 100) * times.length))];
       const cpuAfter = serverCpuMs();
       const cpu = cpuBefore !== null && cpuAfter !== null ? { "server CPU ms/req": Number(((cpuAfter - cpuBefore) / Math.max(1, times.length)).toFixed(2)) } : {};
-      resolve({ target: name, "req/s": Math.round(result.requests.average), p50: at(50).toFixed(1), p95: at(95).toFixed(1), p99: at(99).toFixed(1), "non-2xx": bad + result.non2xx, ...cpu });
+      resolve({ target: name, conns: connections, "req/s": Math.round(result.requests.average), p50: at(50).toFixed(1), p95: at(95).toFixed(1), p99: at(99).toFixed(1), "non-2xx": bad + result.non2xx, ...cpu });
     });
     instance.on("response", (_client, status, _bytes, ms) => {
       times.push(ms);
@@ -111,7 +114,8 @@ async function main() {
     const rows = [];
     const only = process.env.BENCH_ONLY ? new RegExp(process.env.BENCH_ONLY, "i") : null;
     for (const [name, path, headers] of targets) if (!only || only.test(name)) rows.push(await measure(name, path, headers));
-    console.log(`${base}, ${connections} connections, ${seconds} s each (latencies in ms):`);
+    for (const c of sweep) for (const [name, path, headers] of targets) if (name.startsWith("site page") && (!only || only.test(name))) rows.push(await measure(name, path, headers, c));
+    console.log(`${base}, ${defaultConnections} connections unless "conns" says otherwise, ${seconds} s each (latencies in ms):`);
     console.table(rows);
   } finally {
     await sql`delete from organization where id = ${org}`;
