@@ -92,8 +92,10 @@ describe("the portal pages", () => {
   it("show a site's status, keep-out map and issued documents, and nothing internal", async () => {
     const got = await get(portalSite, `/portal/sites/${mine}`, asClient(), { siteId: mine });
     expect(got.status).toBe(200);
-    const body = got.body as { status: { compliant: boolean; lockedAccess: string[] }; maps: { name: string; classes: number[] }[]; documents: { id: string }[] };
+    const body = got.body as { status: { compliant: boolean; lockedAccess: string[] }; basis: { assessmentName: string; documentKind: string }; maps: { name: string; classes: number[] }[]; documents: { id: string }[] };
     expect(body.status.compliant).toBe(false);
+    // The status names the assessment it comes from, so a landlord can tell it from another document's figure.
+    expect(body.basis).toMatchObject({ assessmentName: "Portal baseline", documentKind: "letter" });
     expect(body.status.lockedAccess).toEqual(["Stair door"]);
     expect(body.maps.map((m) => m.name)).toEqual(["Main roof"]);
     expect(body.maps[0].classes.some((c) => c > 0 && c !== 255)).toBe(true);

@@ -36,7 +36,7 @@ function documentOf(d: DocumentListRow): PortalDocument {
 
 function basisOf(a: AssessmentRow, d: DocumentListRow): StatusBasis {
   const standard = `${standardLabels[a.standard as StandardId] ?? a.standard}, ${tierLabels[a.standard as StandardId]?.[a.tier as Tier] ?? a.tier}`;
-  return { assessedOn: a.createdAt.toISOString(), standard, documentKind: d.kind, issuedAt: d.issuedAt?.toISOString() ?? null };
+  return { assessmentName: a.name, assessedOn: a.createdAt.toISOString(), standard, documentKind: d.kind, issuedAt: d.issuedAt?.toISOString() ?? null };
 }
 
 /** The status from the latest issued document's assessment, or null when nothing is issued yet. */

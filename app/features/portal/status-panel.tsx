@@ -34,7 +34,7 @@ export function StatusBadge({ status }: { status: SiteStatus | null }) {
 export function BasisLine({ basis }: { basis: StatusBasis }) {
   return (
     <p className="text-sm text-graphite-600">
-      From the assessment of <DateText value={basis.assessedOn} /> against the {basis.standard} limit, issued in the {kindLabels[basis.documentKind].toLowerCase()}
+      From the assessment “<span className="[overflow-wrap:anywhere]">{basis.assessmentName}</span>” of <DateText value={basis.assessedOn} /> against the {basis.standard} limit, issued in the {kindLabels[basis.documentKind].toLowerCase()}
       {basis.issuedAt ? (
         <>
           {" "}of <DateText value={basis.issuedAt} />

@@ -16,7 +16,7 @@ export type StatusSource = {
 };
 
 /** Where the status comes from: the assessment behind the latest issued document. */
-export type StatusBasis = { assessedOn: string; standard: string; documentKind: "report" | "letter" | "certificate"; issuedAt: string | null };
+export type StatusBasis = { assessmentName: string; assessedOn: string; standard: string; documentKind: "report" | "letter" | "certificate"; issuedAt: string | null };
 export type KeepOutZone = { areaM2: number; worstClass: number; where: string };
 export type KeepOut = { surfaceId: string; name: string; kind: "area" | "facade"; worstClass: number; worstPercent: number; overGeneralM2: number; rule: string; zones: KeepOutZone[] };
 export type SiteStatus = {
