@@ -34,7 +34,7 @@ test("an engineer imports emitters from CSV, fixes the file after the report, an
   const editor = page.locator("form[id^='emitter-']");
   await editor.getByLabel("Frequency (MHz)").fill("");
   await editor.getByRole("button", { name: "Save E1" }).click();
-  await expect(editor.getByText("Enter the frequency in MHz from 0 to 300000.")).toBeVisible();
+  await expect(editor.getByText("Enter the frequency in MHz from 0 to 300,000.")).toBeVisible();
   await editor.getByLabel("Frequency (MHz)").fill("806");
   await editor.getByLabel("Power per carrier").fill("49");
   await editor.getByLabel("Power unit").selectOption("dBm");

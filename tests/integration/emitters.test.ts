@@ -82,13 +82,13 @@ describe("PUT /api/v1/sites/:id/emitters", () => {
     expect(got.status).toBe(400);
     expect(got.body.error.fields).toMatchObject({
       "emitters[1].label": "Enter a label (e.g. A1).",
-      "emitters[1].frequencyMHz": "Enter the frequency in MHz from 0 to 300000.",
-      "emitters[1].powerPerCarrierW": "Enter the power per carrier in W from 0 to 1000000.",
+      "emitters[1].frequencyMHz": "Enter the frequency in MHz from 0 to 300,000.",
+      "emitters[1].powerPerCarrierW": "Enter the power per carrier in W from 0 to 1,000,000.",
       "emitters[1].gainUnit": "Choose the gain's unit: dBi, dBd.",
       "emitters[1].carriers": "Enter the number of carriers as a whole number.",
       "emitters[1].dutyFactor": "Enter the duty factor from 0 to 1.",
       "emitters[1]": "Unknown field: colour.",
-      "emitters[2].position.z": "Enter z in metres from -10000 to 10000.",
+      "emitters[2].position.z": "Enter z in metres from -10,000 to 10,000.",
       "emitters[2].azimuthDeg": "Enter the azimuth in degrees from -360 to 360.",
       "emitters[3].pattern.hBeamwidthDeg": "Enter the horizontal beamwidth in degrees from 0 to 360.",
     });
@@ -138,7 +138,7 @@ describe("the Emitters section's inline edit", () => {
   it("answers field errors with 400 and refuses other organisations' and read-only roles", async () => {
     const bad = await post(form({ intent: "add-emitter", frequencyMHz: "abc" }));
     expect(bad.status).toBe(400);
-    expect(bad.body).toMatchObject({ result: { error: { frequencyMHz: ["Enter the frequency in MHz from 0 to 300000."] } } });
+    expect(bad.body).toMatchObject({ result: { error: { frequencyMHz: ["Enter the frequency in MHz from 0 to 300,000."] } } });
     const dish = await post(form({ intent: "add-emitter", model: "aperture" }));
     expect(dish.status).toBe(400);
     expect(dish.body).toMatchObject({ result: { error: { dishDiameterM: ["Enter the dish diameter in metres for the aperture model."] } } });

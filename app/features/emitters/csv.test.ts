@@ -48,8 +48,8 @@ describe("emitter CSV: reading", () => {
     const text = `${header}\n${good}\nA2,N,LTE,0,40,15,0,0,0,0\nA3,N,LTE,739,40,15,0,0,0,\n`;
     const { valid, problems } = emittersFromCsv(text, library);
     expect(valid.map((v) => v.row)).toEqual([2]);
-    expect(problems).toContainEqual({ row: 3, column: "frequency_mhz", message: "Enter the frequency in MHz from 0 to 300000." });
-    expect(problems).toContainEqual({ row: 4, column: "z_m", message: "Enter z in metres from -10000 to 10000." });
+    expect(problems).toContainEqual({ row: 3, column: "frequency_mhz", message: "Enter the frequency in MHz from 0 to 300,000." });
+    expect(problems).toContainEqual({ row: 4, column: "z_m", message: "Enter z in metres from -10,000 to 10,000." });
   });
 
   it("takes dBm and dBd columns, converting to W and dBi", () => {
