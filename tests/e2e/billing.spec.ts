@@ -88,12 +88,21 @@ test("the client buys a certificate and downloads it", async ({ page }, info) =>
 test("billing issues an invoice, the client pays through the link, billing refunds half", async ({ browser }, info) => {
   const billing = await browser.newPage();
   await signIn(billing, "billing@demo.isotrope.test");
-  await visit(billing, "/billing/invoices/new");
-  await billing.getByLabel("Client").selectOption({ label: "Larchmont Estates" });
-  await billing.getByRole("button", { name: "Show assessments" }).click();
-  await billing.getByRole("checkbox", { name: `Assessment fee for ${ASSESSMENT}` }).check();
-  await billing.getByRole("button", { name: "Make the draft" }).click();
-  await expect(billing.getByText("The draft invoice is made.")).toBeVisible();
+  const makeDraft = async (fee: string) => {
+    await visit(billing, "/billing/invoices/new");
+    await billing.getByLabel("Client").selectOption({ label: "Larchmont Estates" });
+    await billing.getByRole("button", { name: "Show assessments" }).click();
+    await billing.getByRole("checkbox", { name: `${fee} for ${ASSESSMENT}` }).check();
+    await billing.getByRole("button", { name: "Make the draft" }).click();
+    await expect(billing.getByText("The draft invoice is made.")).toBeVisible();
+  };
+  // A draft with the wrong line is discarded (it had no number and was never sent), then made again.
+  await makeDraft("Certificate fee");
+  const wrong = billing.url();
+  await billing.getByRole("button", { name: "Discard the draft" }).click();
+  await expect(billing.getByText("The draft is discarded.")).toBeVisible();
+  expect((await billing.request.get(wrong)).status()).toBe(404);
+  await makeDraft("Assessment fee");
   const started = Date.now();
   await billing.getByRole("button", { name: "Issue and send" }).click();
   const issued = billing.getByText(/Invoice INV-\d{5} is issued and sent/);

@@ -6,7 +6,7 @@
 import { randomUUID } from "node:crypto";
 import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
-import { createInvoice, issueInvoice } from "~/features/billing/invoices.server";
+import { createInvoice, discardDraft, issueInvoice } from "~/features/billing/invoices.server";
 import { db, schema } from "~/infra/db.server";
 import { signPayload } from "~/infra/stripe.server";
 import * as webhook from "~/routes/api/stripe/webhook";
@@ -200,5 +200,27 @@ describe("invoice numbers", () => {
     await expect(issueInvoice(actor, drafts[0].id)).rejects.toMatchObject({ status: 409 });
     const [settings] = await db.select().from(schema.billingSettings).where(eq(schema.billingSettings.organizationId, other.id));
     expect(settings.lastInvoiceNumber).toBe(12);
+  });
+});
+
+describe("a draft invoice", () => {
+  it("can be discarded, lines and all, with an audit record; an issued one cannot, nor another organisation's", async () => {
+    const other = await createOrg("billing-discard");
+    const [client] = await db.insert(schema.client).values({ organizationId: other.id, name: "Discard client" }).returning();
+    await db.insert(schema.billingSettings).values({ organizationId: other.id, currency: "eur" });
+    await db.insert(schema.price).values({ organizationId: other.id, kind: "rush_surcharge", name: "Rush surcharge", amount: 5000, currency: "eur" });
+    const actor = { organizationId: other.id, userId: other.people.billing.userId };
+    const [draft, kept] = [await createInvoice(actor, { clientId: client.id, assessmentIds: [], certificates: [], rush: true, notes: "typo" }), await createInvoice(actor, { clientId: client.id, assessmentIds: [], certificates: [], rush: true, notes: "" })];
+    // Not from another organisation (404), and nothing changes.
+    await expect(discardDraft({ organizationId: org.id, userId: org.people.billing.userId }, draft.id)).rejects.toMatchObject({ status: 404 });
+    await discardDraft(actor, draft.id);
+    expect(await db.select().from(schema.invoice).where(eq(schema.invoice.id, draft.id))).toEqual([]);
+    expect(await db.select().from(schema.invoiceLine).where(eq(schema.invoiceLine.invoiceId, draft.id))).toEqual([]);
+    const [audit] = await db.select().from(schema.auditEvent).where(and(eq(schema.auditEvent.subjectId, draft.id), eq(schema.auditEvent.action, "invoice.discarded")));
+    expect(audit.before).toMatchObject({ state: "draft", total: 5000, lines: [{ description: "Rush surcharge: priority handling", amount: 5000 }] });
+    // Issued: refused, and it stays.
+    await issueInvoice(actor, kept.id);
+    await expect(discardDraft(actor, kept.id)).rejects.toMatchObject({ status: 409 });
+    expect(await db.select({ id: schema.invoice.id }).from(schema.invoice).where(eq(schema.invoice.id, kept.id))).toHaveLength(1);
   });
 });

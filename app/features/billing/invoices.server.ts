@@ -141,6 +141,19 @@ async function sendInvoice(row: InvoiceRow) {
   return to.length;
 }
 
+/** A draft was never numbered nor sent, so it can go altogether (lines with it); the audit keeps what it was. */
+export async function discardDraft(actor: Actor, id: string) {
+  return db.transaction(async (tx) => {
+    const [row] = await tx.select().from(invoice).where(and(eq(invoice.id, id), eq(invoice.organizationId, actor.organizationId))).for("update");
+    if (!row) throw new DomainError("There is no such invoice.", 404);
+    if (row.state !== "draft") throw new DomainError("Only a draft can be discarded; void an issued invoice instead.", 409);
+    const lines = await tx.select({ description: invoiceLine.description, amount: invoiceLine.amount }).from(invoiceLine).where(eq(invoiceLine.invoiceId, id));
+    await tx.delete(invoice).where(eq(invoice.id, id));
+    await auditChange(tx, actor, { action: "invoice.discarded", entity: "invoice", entityId: id, before: { state: "draft", clientId: row.clientId, total: row.total, currency: row.currency, lines }, after: null });
+    return row;
+  });
+}
+
 export async function voidInvoice(actor: Actor, id: string) {
   const voided = await db.transaction(async (tx) => {
     const [row] = await tx.select().from(invoice).where(and(eq(invoice.id, id), eq(invoice.organizationId, actor.organizationId))).for("update");

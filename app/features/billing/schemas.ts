@@ -43,7 +43,7 @@ export const invoiceCreateSchema = z.object({
 });
 export type InvoiceCreateInput = z.output<typeof invoiceCreateSchema>;
 
-export const invoiceActionSchema = z.object({ intent: oneOf("an action", ["issue", "void", "resend"] as const) });
+export const invoiceActionSchema = z.object({ intent: oneOf("an action", ["issue", "void", "resend", "discard"] as const) });
 
 export const refundSchema = z.object({
   intent: z.literal("refund"),

@@ -1,5 +1,5 @@
 // /billing/invoices/:invoiceId: one invoice (lines, state, payments with their refunds); issue and
-// send, send again, void while unpaid, refund all or part of a payment.
+// send or discard a draft, send again, void while unpaid, refund all or part of a payment.
 import { data, Form, useNavigation } from "react-router";
 import { Button, ButtonLink } from "~/components/button";
 import { DateText } from "~/components/date-text";
@@ -8,7 +8,7 @@ import { Card, Notice, PageHeader } from "~/components/panels";
 import { requireMember } from "~/features/auth/guard.server";
 import { BillingTabs, InvoiceStateTag, replyErrors } from "~/features/billing/billing-nav";
 import { canVoid } from "~/features/billing/invoice-state";
-import { issueInvoice, requireInvoice, resendInvoice, voidInvoice } from "~/features/billing/invoices.server";
+import { discardDraft, issueInvoice, requireInvoice, resendInvoice, voidInvoice } from "~/features/billing/invoices.server";
 import { invoiceNumberText } from "~/features/billing/json";
 import { decimalOf, formatMoney } from "~/features/billing/money";
 import { paymentsOfInvoice, refundsOf } from "~/features/billing/payments.server";
@@ -63,6 +63,10 @@ export async function action({ request, context, params }: Route.ActionArgs) {
       const sent = await resendInvoice(actor, params.invoiceId);
       return redirectWithFlash(here, { kind: sent ? "success" : "info", message: sent ? `Sent again to ${sent} address${sent === 1 ? "" : "es"}.` : "The client has no members or contacts with an e-mail address." });
     }
+    if (intent === "discard") {
+      await discardDraft(actor, params.invoiceId);
+      return redirectWithFlash("/billing/invoices", { kind: "success", message: "The draft is discarded. Make a new one to bill other lines." });
+    }
     await voidInvoice(actor, params.invoiceId);
     return redirectWithFlash(here, { kind: "success", message: "The invoice is void." });
   } catch (error) {
@@ -108,8 +112,9 @@ export default function Invoice({ loaderData, actionData }: Route.ComponentProps
           <Form method="post" className="mt-5 flex flex-wrap gap-2">
             {inv.state === "draft" ? <Button name="intent" value="issue" disabled={busy}>Issue and send</Button> : null}
             {inv.state !== "draft" && inv.state !== "void" ? <Button name="intent" value="resend" tone="secondary" disabled={busy}>Send again</Button> : null}
-            {canVoid(inv.state) ? <Button name="intent" value="void" tone="danger" disabled={busy}>Void the invoice</Button> : null}
+            {inv.state === "draft" ? <Button name="intent" value="discard" tone="danger" disabled={busy}>Discard the draft</Button> : canVoid(inv.state) ? <Button name="intent" value="void" tone="danger" disabled={busy}>Void the invoice</Button> : null}
           </Form>
+          {inv.state === "draft" ? <p className="mt-2 text-sm text-graphite-600">A draft has no number and has not been sent. To bill other lines, discard it and make a new one.</p> : null}
         </Card>
         <Card title="Payments">
           {payments.length === 0 ? (
