@@ -3,7 +3,7 @@
 import { interpolateViridis } from "d3-scale-chromatic";
 import { describe, expect, it } from "vitest";
 import { colourOf as webColour } from "~/features/exposure/colour-scale";
-import { colourOf } from "./colour-scale";
+import { colourOf, fillOf } from "./colour-scale";
 
 const lightness = (hex: string) => {
   const [r, g, b] = [1, 3, 5].map((i) => parseInt(hex.slice(i, i + 2), 16) / 255);
@@ -24,5 +24,14 @@ describe("PDF colour scale", () => {
       expect(lightness(colourOf(values[i]))).toBeLessThan(lightness(colourOf(values[i - 1])));
       expect(lightness(webColour(values[i])!)).toBeLessThan(lightness(webColour(values[i - 1])!));
     }
+  });
+
+  it("leaves cells under 1 % unfilled, as the web map does, and fills from 1 % on", () => {
+    for (const v of [0, 0.2, 0.999]) {
+      expect(fillOf(v)).toBeNull();
+      expect(webColour(v)).toBeNull();
+    }
+    expect(fillOf(1)).toBe(colourOf(1));
+    expect(fillOf(250)).toBe(colourOf(250));
   });
 });

@@ -8,6 +8,11 @@ export const SCALE_TICKS = [1, 10, 100, 1000];
 /** Contour lines drawn and labelled on the maps. */
 export const MAP_CONTOURS = [50, 100, 500];
 
+/** A map cell's fill: none below 1 %, as on the web map, else the quantised colour. */
+export function fillOf(percent: number): string | null {
+  return percent >= SCALE_MIN_PERCENT ? colourOf(percent) : null;
+}
+
 const steps = 48;
 const cache = new Map<number, string>();
 /** The colour of a percentage (values under 1 % take the scale's lightest), quantised to 48 steps along the axis. */

@@ -5,7 +5,7 @@ import { contours } from "d3-contour";
 import { around, placeLabels, segmentBoxes, type Box as LabelBox, type LabelRequest } from "~/features/exposure/map-labels";
 import { pdfColours as C } from "~/infra/pdf/palette";
 import { say, type Doc } from "~/infra/pdf/pdf.server";
-import { colourOf, MAP_CONTOURS, scalePosition, SCALE_TICKS } from "./colour-scale";
+import { colourOf, fillOf, MAP_CONTOURS, scalePosition, SCALE_TICKS } from "./colour-scale";
 
 type XY = [number, number];
 export type MapGrid = { x0: number; y0: number; step: number; nx: number; ny: number; percent: number[]; mask?: number[] };
@@ -19,21 +19,21 @@ function rings(values: number[], nx: number, ny: number, level: number): XY[][] 
   return mp.coordinates.flatMap((polygon) => polygon.map((ring) => ring.map(([px, py]) => [px - 0.5, py - 0.5] as XY)));
 }
 
-/** Fills cells row by row, one rectangle per run of equal colour. */
+/** Fills cells row by row, one rectangle per run of equal colour; cells under 1 % stay unfilled. */
 function cells(doc: Doc, nx: number, ny: number, value: (i: number, j: number) => number | null, at: (i: number, j: number) => XY, cw: number, ch: number) {
   for (let j = 0; j < ny; j++) {
     let i = 0;
     while (i < nx) {
       const v = value(i, j);
-      if (v === null) {
+      const colour = v === null ? null : fillOf(v);
+      if (colour === null) {
         i++;
         continue;
       }
-      const colour = colourOf(v);
       let k = i + 1;
       while (k < nx) {
         const w = value(k, j);
-        if (w === null || colourOf(w) !== colour) break;
+        if (w === null || fillOf(w) !== colour) break;
         k++;
       }
       const [x, y] = at(i, j);

@@ -14,7 +14,7 @@ import type { SourceAssessment } from "./source";
 type Emitter = NonNullable<EvaluationRequestInput["emitters"]>[number];
 
 export function reportResults(doc: Doc, a: SourceAssessment, labels: Map<string, string>) {
-  const legend = `Total % of the ${standardText(a)} limit, log scale (viridis). Contours at 50, 100 and 500 %.`;
+  const legend = `Total % of the ${standardText(a)} limit, log scale (viridis); under 1 % unfilled. Contours at 50, 100 and 500 %.`;
   doc.addPage();
   heading(doc, "4. Predicted exposure by level");
   paragraph(doc, `Each map shows the total predicted exposure as a percentage of the limit, ${a.options.mode === "average" ? "averaged over" : "the maximum over"} the heights assessed, on a ${a.options.gridStepM} m grid. The white line is 100 % of the limit.`);
