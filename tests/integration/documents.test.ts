@@ -299,6 +299,29 @@ describe("GET /api/v1/documents", () => {
 });
 
 describe("background jobs", () => {
+  it("finishes an issued render whose announcement failed after the PDF was stored: on the retry it is ready and told once", async () => {
+    const id = await draft("engineer", "letter");
+    await db.update(schema.document).set({ renderStatus: "queued", pdf: null, sha256: null }).where(eq(schema.document.id, id));
+    await db.update(schema.document).set({ state: "issued", issuedAt: new Date() }).where(eq(schema.document.id, id));
+    const job = { id: randomUUID(), data: { documentId: id }, retryCount: 0, retryLimit: 5 };
+    // The first run stores the PDF, then telling people fails: the job fails and the document is queued again.
+    await expect(renderJob(job, { issued: async () => { throw new Error("mail queue down"); } })).rejects.toThrow("mail queue down");
+    const failed = await row(id);
+    expect(failed.pdf).not.toBeNull();
+    expect(failed.renderStatus).toBe("queued");
+    // The retry does not render again; it tells people and marks the PDF ready.
+    const told: string[] = [];
+    await renderJob({ ...job, retryCount: 1 }, { issued: async (doc) => void told.push(doc) });
+    expect(told).toEqual([id]);
+    const healed = await row(id);
+    expect(healed.renderStatus).toBe("ready");
+    expect(healed.renderAttempts).toBe(failed.renderAttempts);
+    expect(healed.sha256).toBe(failed.sha256);
+    // Once ready, a late duplicate job does nothing.
+    await renderJob({ ...job, retryCount: 2 }, { issued: async (doc) => void told.push(doc) });
+    expect(told).toEqual([id]);
+  });
+
   it("retries a job that fails", async () => {
     const queue: QueueSpec = { name: `test-retry-${randomUUID().slice(0, 8)}`, retryLimit: 3, retryDelay: 1, expireInSeconds: 30 };
     const calls: number[] = [];

@@ -26,7 +26,16 @@ export async function renderJob(job: Job<{ documentId: string }>, after: { issue
   const [doc] = await db.select().from(document).where(eq(document.id, job.data.documentId));
   if (!doc) return;
   const asDraft = (draftStates as readonly string[]).includes(doc.state);
-  if (!asDraft && doc.pdf) return; // issued and stored: nothing to do
+  if (!asDraft && doc.pdf) {
+    // Stored already. Not "ready" means the run that stored it failed afterwards (telling people
+    // failed, and the catch below put it back to "queued"): finish that run's work, or the page
+    // waiting for the PDF would wait for ever.
+    if (doc.renderStatus !== "ready") {
+      await after.issued?.(doc.id);
+      await db.update(document).set({ renderStatus: "ready", renderError: null }).where(eq(document.id, doc.id));
+    }
+    return;
+  }
   await db.update(document).set({ renderStatus: "rendering", renderAttempts: doc.renderAttempts + 1 }).where(eq(document.id, doc.id));
   try {
     const pause = Number(process.env.DOCUMENTS_RENDER_PAUSE_MS ?? 0); // for the kill -9 test only
