@@ -10,7 +10,7 @@ import { and, eq, sql } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { evaluate, type EvaluationRequestInput } from "~/engine";
 import { freezeAssessment } from "~/features/assessments/freeze.server";
-import { MAIL_QUEUE, mailJob, RENDER_QUEUE, renderJob } from "~/features/documents/jobs.server";
+import { MAIL_QUEUE, mailJob, RENDER_QUEUE, renderJob, requeueStranded } from "~/features/documents/jobs.server";
 import { announceIssued } from "~/features/documents/commands.server";
 import { areaText, metresText, percentText, wattsText } from "~/features/documents/format";
 import { db, schema } from "~/infra/db.server";
@@ -299,6 +299,18 @@ describe("GET /api/v1/documents", () => {
 });
 
 describe("background jobs", () => {
+  it("queues again a document left queued without a job, once a minute at most", async () => {
+    const id = await draft("engineer", "letter");
+    await db.execute(sql`delete from pgboss.job where name = ${RENDER_QUEUE.name} and data->>'documentId' = ${id}`);
+    const jobsOf = async () => (await db.execute(sql`select count(*)::int as n from pgboss.job where name = ${RENDER_QUEUE.name} and data->>'documentId' = ${id}`)) as unknown as { n: number }[];
+    await db.update(schema.document).set({ renderStatus: "queued", updatedAt: new Date(Date.now() - 5 * 60_000) }).where(eq(schema.document.id, id));
+    expect(await requeueStranded()).toBeGreaterThanOrEqual(1);
+    expect((await jobsOf())[0].n).toBe(1);
+    // Marked: the next sweep within the minute leaves it alone.
+    await requeueStranded();
+    expect((await jobsOf())[0].n).toBe(1);
+  });
+
   it("finishes an issued render whose announcement failed after the PDF was stored: on the retry it is ready and told once", async () => {
     const id = await draft("engineer", "letter");
     await db.update(schema.document).set({ renderStatus: "queued", pdf: null, sha256: null }).where(eq(schema.document.id, id));

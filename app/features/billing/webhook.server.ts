@@ -40,7 +40,7 @@ export async function handleEvent(event: Stripe.Event) {
     return { replay: false as const, ...applied };
   });
   if (!result.replay && result.renderDocumentId) {
-    // After the commit; a render left queued is picked up by the next worker start (requeueStranded).
+    // After the commit; a render left queued (the enqueue failed) is queued again by the workers' sweep (requeueStranded).
     await queueRender(result.renderDocumentId).catch((e) => console.error("[billing] queueing the certificate render failed:", e));
   }
   return result.replay ? { replay: true } : { replay: false, outcome: result.outcome, note: result.note ?? "" };

@@ -69,18 +69,35 @@ export async function mailJob(job: Job<DocumentMail>) {
   await sendMail({ ...mail, attachments });
 }
 
-/** Documents left "queued" without a job (the app stopped between commit and enqueue): queue them again. */
-export async function requeueStranded() {
-  const rows = await db.select({ id: document.id }).from(document).where(and(eq(document.renderStatus, "queued"), lt(document.updatedAt, new Date(Date.now() - 60_000)))).limit(200);
-  for (const r of rows) await queueRender(r.id);
+/** Documents left "queued" without a job (the app stopped between commit and enqueue, or the enqueue
+ * failed): queue them again, and mark them so the next sweep leaves them a minute. A document merely
+ * waiting its turn may get a second job; a render run twice stores one PDF. */
+export async function requeueStranded(olderThanMs = 60_000) {
+  const rows = await db.select({ id: document.id }).from(document).where(and(eq(document.renderStatus, "queued"), lt(document.updatedAt, new Date(Date.now() - olderThanMs)))).limit(200);
+  for (const r of rows) {
+    await db.update(document).set({ updatedAt: new Date() }).where(and(eq(document.id, r.id), eq(document.renderStatus, "queued")));
+    await queueRender(r.id);
+  }
+  return rows.length;
 }
 
-/** Starts the render and mail workers in this process. */
+/** How often a running worker looks for stranded documents. */
+const SWEEP_MS = Number(process.env.JOBS_SWEEP_SECONDS ?? 60) * 1000;
+
+/** Starts the render and mail workers in this process, and the sweep for stranded documents. */
 export async function startDocumentWorker(issued: (documentId: string) => Promise<void>) {
   const worker = await startWorker([
     { queue: RENDER_QUEUE, handle: (job) => renderJob(job, { issued }) },
     { queue: MAIL_QUEUE, handle: mailJob },
   ]);
-  await requeueStranded().catch((e) => console.error("[jobs] requeue failed:", e));
-  return worker;
+  const sweep = () => requeueStranded().catch((e) => console.error("[jobs] requeue failed:", e instanceof Error ? e.message : e));
+  await sweep();
+  const timer = setInterval(sweep, SWEEP_MS);
+  timer.unref();
+  return {
+    stop: async () => {
+      clearInterval(timer);
+      await worker.stop();
+    },
+  };
 }
