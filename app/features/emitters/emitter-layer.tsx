@@ -10,20 +10,57 @@ export type PlanEmitter = { id: string; label: string; operator: string; x: numb
 const opName = (o: string) => o.trim() || "—";
 const px1 = (v: number) => Math.round(v * 10) / 10;
 
+type Box = { x0: number; y0: number; x1: number; y1: number };
+const overlaps = (a: Box, b: Box) => a.x0 < b.x1 && b.x0 < a.x1 && a.y0 < b.y1 && b.y0 < a.y1;
+const R = 9;
+
+/**
+ * Where each emitter's label goes (offsets from its marker), or null where it would print over
+ * another label (the plan's own names included, frame.labels), or, on a plan narrower than 600 px
+ * (a phone), over another emitter's marker: a crowded roof keeps its markers readable and names
+ * only the emitters with room; each marker's title still names it.
+ * Emitters mounted together (within 24 px) stack their labels first. Common practice, no source.
+ */
+export function emitterLabelSpots(frame: PlanFrame, emitters: Pick<PlanEmitter, "label" | "x" | "y" | "azimuthDeg">[]) {
+  const at = emitters.map((e) => frame.toPx(e.x, e.y));
+  const discs: Box[] = at.map(([x, y]) => ({ x0: x - R, y0: y - R, x1: x + R, y1: y + R }));
+  const labels: Box[] = [...(frame.labels ?? [])];
+  // On a wide plan a label may cross a neighbour's marker (it stays legible on its white edge); on a phone's it may not.
+  const narrow = frame.width < 600;
+  return emitters.map((e, k) => {
+    const [px, py] = at[k];
+    const crowd = at.slice(0, k).filter(([qx, qy]) => Math.hypot(qx - px, qy - py) < 24).length;
+    const a = (e.azimuthDeg * Math.PI) / 180;
+    const [dx, dy] = [Math.sin(a), -Math.cos(a)];
+    const w = e.label.length * 6.2;
+    // Away from the arrow first; then the other side, then above or below the other way.
+    for (const [flipX, flipY] of [[false, false], [true, false], [false, true], [true, true]]) {
+      const end = dx > 0.3 !== flipX;
+      const up = dy > 0.3 !== flipY;
+      const x = end ? -R - 3 : R + 3;
+      const y = (up ? -R : R + 8) + (up ? -11 : 11) * crowd;
+      const box = { x0: px + (end ? x - w : x), x1: px + (end ? x : x + w), y0: py + y - 9, y1: py + y + 3 };
+      const outside = box.x0 < 0 || box.y0 < 0 || box.x1 > frame.width || box.y1 > frame.height;
+      if (outside || labels.some((b) => overlaps(b, box)) || (narrow && discs.some((d, j) => j !== k && overlaps(d, box)))) continue;
+      labels.push(box);
+      return { x, y, anchor: end ? ("end" as const) : ("start" as const) };
+    }
+    return null;
+  });
+}
+
 export function EmitterLayer({ frame, emitters, highlightId }: { frame: PlanFrame; emitters: PlanEmitter[]; highlightId?: string | null }) {
   const colours = operatorColours(emitters.map((e) => e.operator));
-  const placed: [number, number][] = [];
+  const spots = emitterLabelSpots(frame, emitters);
   return (
     <g aria-label="Emitters">
-      {emitters.map((e) => {
+      {emitters.map((e, k) => {
         const [px, py] = frame.toPx(e.x, e.y);
-        // Emitters mounted together (within 24 px on the plan) stack their labels instead of printing over each other.
-        const crowd = placed.filter(([qx, qy]) => Math.hypot(qx - px, qy - py) < 24).length;
-        placed.push([px, py]);
+        const spot = spots[k];
         const i = colours.get(opName(e.operator)) ?? 0;
         const a = (e.azimuthDeg * Math.PI) / 180;
         const [dx, dy] = [Math.sin(a), -Math.cos(a)];
-        const r = 9;
+        const r = R;
         const len = 30;
         // A tenth of a pixel is plenty: fewer digits make a lighter page (decision 0009).
         const tip: XY = [px1(dx * len), px1(dy * len)];
@@ -40,9 +77,11 @@ export function EmitterLayer({ frame, emitters, highlightId }: { frame: PlanFram
             <text y={3} textAnchor="middle" fontSize={8} fontWeight={700} fill={ink}>
               {initials(e.operator)}
             </text>
-            <text x={dx > 0.3 ? -r - 3 : r + 3} y={(dy > 0.3 ? -r : r + 8) + (dy > 0.3 ? -11 : 11) * crowd} textAnchor={dx > 0.3 ? "end" : "start"} fontSize={10} fontWeight={600} className="fill-ink-900" paintOrder="stroke" stroke="#ffffff" strokeWidth={3}>
-              {e.label}
-            </text>
+            {spot ? (
+              <text x={spot.x} y={spot.y} textAnchor={spot.anchor} fontSize={10} fontWeight={600} className="fill-ink-900" paintOrder="stroke" stroke="#ffffff" strokeWidth={3}>
+                {e.label}
+              </text>
+            ) : null}
           </g>
         );
       })}

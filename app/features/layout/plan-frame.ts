@@ -11,6 +11,8 @@ export type PlanFrame = {
   height: number;
   toPx: (x: number, y: number) => XY;
   toSite: (px: number, py: number) => XY;
+  /** The plan's own names already drawn (pixel boxes), for layers on top to keep clear of. */
+  labels?: readonly { x0: number; y0: number; x1: number; y1: number }[];
 };
 
 /** The smallest box holding every point, or a 20 m square around the origin when there are none. */

@@ -81,16 +81,21 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
   }, [surfaces, obstructions, accessPoints, extraPoints, draft, planWidth, backdrop, fixedBounds]);
 
   // Area names go where the emitters, access points and other names leave room (label-spot.ts).
-  const areaLabelSpots = useMemo(() => {
+  // An access point's name is left out where an area's or obstruction's name had to take its
+  // place (a small plan on a phone); its marker and letter stay. The names drawn are handed to the
+  // layers on top (frame.labels), which keep clear of them.
+  const { areaLabelSpots, accessNameShown, planLabels } = useMemo(() => {
     const taken: Rect[] = [];
     for (const [x, y] of extraPoints) {
       const [px, py] = frame.toPx(x, y);
       taken.push({ x0: px - 12, y0: py - 12, x1: px + 12, y1: py + 12 });
     }
-    for (const a of accessPoints) {
+    const accessBoxes = accessPoints.map((a) => {
       const [px, py] = frame.toPx(a.x, a.y);
-      taken.push({ x0: px - 7, y0: py - 7, x1: px + 11 + a.name.length * 5.6, y1: py + 7 });
-    }
+      return { x0: px - 7, y0: py - 7, x1: px + 11 + a.name.length * 5.6, y1: py + 7 };
+    });
+    taken.push(...accessBoxes);
+    const names: Rect[] = [];
     const spots = new Map<string, XY>();
     // Obstructions' names first, inside their own outlines; then the areas' names around them.
     for (const o of obstructions) {
@@ -99,15 +104,29 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
       const spot = areaLabelSpot(o.polygon.map((p) => frame.toPx(...p)), text, taken, 8, lineLabelBox);
       spots.set(o.id, spot);
       taken.push(lineLabelBox(spot, text));
+      names.push(lineLabelBox(spot, text));
     }
     for (const s of surfaces) {
       if (s.kind !== "area" || !s.polygon || s.polygon.length < 3) continue;
       const spot = areaLabelSpot(s.polygon.map((p) => frame.toPx(...p)), s.name, taken);
       spots.set(s.id, spot);
       taken.push(areaLabelBox(spot, s.name));
+      names.push(areaLabelBox(spot, s.name));
     }
-    return spots;
+    const nameBox = (b: Rect): Rect => ({ ...b, x0: b.x0 + 16 });
+    const shown = new Set<string>();
+    const drawn = [...names];
+    accessPoints.forEach((a, k) => {
+      const box = nameBox(accessBoxes[k]);
+      if (drawn.some((n) => n.x0 < box.x1 && box.x0 < n.x1 && n.y0 < box.y1 && box.y0 < n.y1)) return;
+      shown.add(a.id);
+      drawn.push(box);
+    });
+    return { areaLabelSpots: spots, accessNameShown: shown, planLabels: drawn };
   }, [frame, surfaces, obstructions, accessPoints, extraPoints]);
+
+  // One object per frame and labels, so the layers' own memos (keyed on the frame) hold.
+  const framed = useMemo(() => ({ ...frame, labels: planLabels }), [frame, planLabels]);
 
   const toSiteFromEvent = (event: MouseEvent<SVGSVGElement>): XY | null => {
     const svg = svgRef.current;
@@ -200,9 +219,11 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
             <text y={4} textAnchor="middle" className="fill-ink-900 text-[9px] font-semibold">
               {a.kind.slice(0, 1).toUpperCase()}
             </text>
-            <text x={9} y={4} className={`fill-ink-700 text-[10px] ${halo.className}`} strokeWidth={halo.strokeWidth}>
-              {a.name}
-            </text>
+            {accessNameShown.has(a.id) ? (
+              <text x={9} y={4} className={`fill-ink-700 text-[10px] ${halo.className}`} strokeWidth={halo.strokeWidth}>
+                {a.name}
+              </text>
+            ) : null}
           </g>
         );
       })}
@@ -215,7 +236,7 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
           })}
         </g>
       ) : null}
-      {children?.(frame)}
+      {children?.(framed)}
       <g aria-hidden="true">
         <rect x={0} y={frame.height} width={frame.width} height={FOOTER} className="fill-white" />
         <line x1={0} x2={frame.width} y1={frame.height} y2={frame.height} className="stroke-rule" />
