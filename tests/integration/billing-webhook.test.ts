@@ -184,13 +184,18 @@ describe("POST /api/stripe/webhook", () => {
   });
 });
 
+/** An organisation of its own with one client, billing in euros, and a rush surcharge of €50 on its price list. */
+async function billingOrg(name: string) {
+  const other = await createOrg(name);
+  const [client] = await db.insert(schema.client).values({ organizationId: other.id, name: `${name} client` }).returning();
+  await db.insert(schema.billingSettings).values({ organizationId: other.id, currency: "eur" });
+  await db.insert(schema.price).values({ organizationId: other.id, kind: "rush_surcharge", name: "Rush surcharge", amount: 5000, currency: "eur" });
+  return { other, client, actor: { organizationId: other.id, userId: other.people.billing.userId } };
+}
+
 describe("invoice numbers", () => {
   it("are gap-free and unique when many invoices are issued at once", async () => {
-    const other = await createOrg("billing-numbers");
-    const [client] = await db.insert(schema.client).values({ organizationId: other.id, name: "Numbers client" }).returning();
-    await db.insert(schema.billingSettings).values({ organizationId: other.id, currency: "eur" });
-    await db.insert(schema.price).values({ organizationId: other.id, kind: "rush_surcharge", name: "Rush surcharge", amount: 5000, currency: "eur" });
-    const actor = { organizationId: other.id, userId: other.people.billing.userId };
+    const { other, client, actor } = await billingOrg("billing-numbers");
     const drafts = [];
     for (let i = 0; i < 12; i++) drafts.push(await createInvoice(actor, { clientId: client.id, assessmentIds: [], certificates: [], rush: true, notes: "" }));
     await Promise.all(drafts.map((d) => issueInvoice(actor, d.id)));
@@ -205,11 +210,7 @@ describe("invoice numbers", () => {
 
 describe("a draft invoice", () => {
   it("can be discarded, lines and all, with an audit record; an issued one cannot, nor another organisation's", async () => {
-    const other = await createOrg("billing-discard");
-    const [client] = await db.insert(schema.client).values({ organizationId: other.id, name: "Discard client" }).returning();
-    await db.insert(schema.billingSettings).values({ organizationId: other.id, currency: "eur" });
-    await db.insert(schema.price).values({ organizationId: other.id, kind: "rush_surcharge", name: "Rush surcharge", amount: 5000, currency: "eur" });
-    const actor = { organizationId: other.id, userId: other.people.billing.userId };
+    const { client, actor } = await billingOrg("billing-discard");
     const [draft, kept] = [await createInvoice(actor, { clientId: client.id, assessmentIds: [], certificates: [], rush: true, notes: "typo" }), await createInvoice(actor, { clientId: client.id, assessmentIds: [], certificates: [], rush: true, notes: "" })];
     // Not from another organisation (404), and nothing changes.
     await expect(discardDraft({ organizationId: org.id, userId: org.people.billing.userId }, draft.id)).rejects.toMatchObject({ status: 404 });
