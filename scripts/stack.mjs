@@ -236,10 +236,38 @@ async function services() {
     BETTER_AUTH_SECRET: mode === "test" ? "isotrope-test-secret-0123456789abcdef0123456789" : authSecret(),
   };
   Object.assign(process.env, env);
+  seedDemo();
+  return { env, mail };
+}
+
+function seedDemo() {
   const seed = run(join(root, "node_modules/.bin/tsx"), [join(root, "scripts/seed.ts")], { env: process.env, quiet: true, allowFail: true });
   if (seed.status !== 0) fail(`seeding failed:\n${seed.stdout}${seed.stderr}`);
   process.stdout.write(seed.stdout.replace(/^(?=.)/gm, "[seed] "));
-  return { env, mail };
+}
+
+/**
+ * The browser tests' own database, made afresh on the same server, migrated and seeded. The
+ * integration tests leave documents queued in theirs (no worker runs then), and an app started on
+ * it would render all of those first while the browser tests wait for their own PDFs.
+ */
+async function freshDatabase(databaseUrl, name) {
+  const { default: postgres } = await import("postgres");
+  const admin = new URL(databaseUrl);
+  admin.pathname = "/postgres";
+  const sql = postgres(admin.toString(), { max: 1, onnotice: () => {} });
+  try {
+    await sql.unsafe(`drop database if exists "${name}" with (force)`);
+    await sql.unsafe(`create database "${name}"`);
+  } finally {
+    await sql.end();
+  }
+  const url = new URL(databaseUrl);
+  url.pathname = `/${name}`;
+  await migrate(url.toString());
+  process.env.DATABASE_URL = url.toString();
+  seedDemo();
+  return url.toString();
 }
 
 async function startApp(env) {
@@ -329,7 +357,8 @@ async function test() {
   const build = await suite("build", "npm", ["run", "-s", "build"]);
   counts[build ? "passed" : "failed"] += 1;
   if (build) {
-    await startApp({ ...env, SIGN_IN_LIMIT: "500" });
+    const e2eDatabase = await freshDatabase(env.DATABASE_URL, `${profile.db}_e2e`);
+    await startApp({ ...env, DATABASE_URL: e2eDatabase, SIGN_IN_LIMIT: "500" });
     const e2eOk = await suite("playwright (Chromium)", bin("playwright"), ["test", "-c", "tests/e2e/playwright.config.ts"], {
       PLAYWRIGHT_JSON_OUTPUT_NAME: join(out, "playwright.json"),
       PLAYWRIGHT_SKIP_BROWSER_DOWNLOAD: "1",
