@@ -308,8 +308,14 @@ async function start() {
 function runInherit(command, args, env) {
   return new Promise((resolve) => {
     const child = spawn(command, args, { cwd: root, stdio: "inherit", env });
-    child.on("error", () => resolve(1));
-    child.on("exit", (code, signal) => resolve(code ?? (signal ? 1 : 0)));
+    children.push(child); // stopped with the services if one of them fails meanwhile
+    const done = (code) => {
+      const i = children.indexOf(child);
+      if (i >= 0) children.splice(i, 1);
+      resolve(code);
+    };
+    child.on("error", () => done(1));
+    child.on("exit", (code, signal) => done(code ?? (signal ? 1 : 0)));
   });
 }
 
