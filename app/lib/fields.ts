@@ -77,10 +77,10 @@ export function text(max: number) {
 type NumberRule = { min?: number; max?: number; integer?: boolean; exclusiveMin?: boolean };
 
 /** A bound as people write it in a message: "300,000", "-10,000", "0.5". */
-export const figure = (n: number) => n.toLocaleString("en-GB", { maximumFractionDigits: 6 });
+const bound = (n: number) => n.toLocaleString("en-GB", { maximumFractionDigits: 6 });
 
 function describeRange(what: string, rule: NumberRule) {
-  const [min, max] = [rule.min === undefined ? undefined : figure(rule.min), rule.max === undefined ? undefined : figure(rule.max)];
+  const [min, max] = [rule.min === undefined ? undefined : bound(rule.min), rule.max === undefined ? undefined : bound(rule.max)];
   if (min !== undefined && max !== undefined) return `Enter ${what} from ${min} to ${max}.`;
   if (min !== undefined) return rule.exclusiveMin ? `Enter ${what} above ${min}.` : `Enter ${what} of at least ${min}.`;
   if (max !== undefined) return `Enter ${what} of at most ${max}.`;

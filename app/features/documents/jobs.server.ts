@@ -73,11 +73,9 @@ export async function mailJob(job: Job<DocumentMail>) {
  * failed): queue them again, and mark them so the next sweep leaves them a minute. A document merely
  * waiting its turn may get a second job; a render run twice stores one PDF. */
 export async function requeueStranded(olderThanMs = 60_000) {
-  const rows = await db.select({ id: document.id }).from(document).where(and(eq(document.renderStatus, "queued"), lt(document.updatedAt, new Date(Date.now() - olderThanMs)))).limit(200);
-  for (const r of rows) {
-    await db.update(document).set({ updatedAt: new Date() }).where(and(eq(document.id, r.id), eq(document.renderStatus, "queued")));
-    await queueRender(r.id);
-  }
+  const stranded = db.select({ id: document.id }).from(document).where(and(eq(document.renderStatus, "queued"), lt(document.updatedAt, new Date(Date.now() - olderThanMs)))).limit(200);
+  const rows = await db.update(document).set({ updatedAt: new Date() }).where(and(inArray(document.id, stranded), eq(document.renderStatus, "queued"))).returning({ id: document.id });
+  for (const r of rows) await queueRender(r.id);
   return rows.length;
 }
 

@@ -2,6 +2,7 @@
 // centre with an arrow along its azimuth, filled by operator (operator-palette.ts) and carrying the
 // operator's initials and the emitter's label, so the plan reads in greyscale too. Inactive
 // emitters are hollow and dashed.
+import { rectsOverlap, type Rect } from "~/features/layout/label-spot";
 import type { PlanFrame, XY } from "~/features/layout/plan-frame";
 import { initials, OPERATOR_INK, OPERATOR_PALETTE, operatorColours } from "./operator-palette";
 
@@ -10,8 +11,6 @@ export type PlanEmitter = { id: string; label: string; operator: string; x: numb
 const opName = (o: string) => o.trim() || "—";
 const px1 = (v: number) => Math.round(v * 10) / 10;
 
-type Box = { x0: number; y0: number; x1: number; y1: number };
-const overlaps = (a: Box, b: Box) => a.x0 < b.x1 && b.x0 < a.x1 && a.y0 < b.y1 && b.y0 < a.y1;
 const R = 9;
 
 /**
@@ -23,8 +22,8 @@ const R = 9;
  */
 export function emitterLabelSpots(frame: PlanFrame, emitters: Pick<PlanEmitter, "label" | "x" | "y" | "azimuthDeg">[]) {
   const at = emitters.map((e) => frame.toPx(e.x, e.y));
-  const discs: Box[] = at.map(([x, y]) => ({ x0: x - R, y0: y - R, x1: x + R, y1: y + R }));
-  const labels: Box[] = [...(frame.labels ?? [])];
+  const discs: Rect[] = at.map(([x, y]) => ({ x0: x - R, y0: y - R, x1: x + R, y1: y + R }));
+  const labels: Rect[] = [...(frame.labels ?? [])];
   // On a wide plan a label may cross a neighbour's marker (it stays legible on its white edge); on a phone's it may not.
   const narrow = frame.width < 600;
   return emitters.map((e, k) => {
@@ -41,7 +40,7 @@ export function emitterLabelSpots(frame: PlanFrame, emitters: Pick<PlanEmitter, 
       const y = (up ? -R : R + 8) + (up ? -11 : 11) * crowd;
       const box = { x0: px + (end ? x - w : x), x1: px + (end ? x : x + w), y0: py + y - 9, y1: py + y + 3 };
       const outside = box.x0 < 0 || box.y0 < 0 || box.x1 > frame.width || box.y1 > frame.height;
-      if (outside || labels.some((b) => overlaps(b, box)) || (narrow && discs.some((d, j) => j !== k && overlaps(d, box)))) continue;
+      if (outside || labels.some((b) => rectsOverlap(b, box)) || (narrow && discs.some((d, j) => j !== k && rectsOverlap(d, box)))) continue;
       labels.push(box);
       return { x, y, anchor: end ? ("end" as const) : ("start" as const) };
     }

@@ -1,6 +1,7 @@
 // The grid side of the mitigation proposal: which cells people can stand on, the zones of each
 // exposure class, the access points that lead onto a surface, and where a person walking in
 // from an access point first meets a zone. Pure; cells are row-major (j·nx + i) as the engine's.
+import { pointInPolygon } from "~/engine";
 import type { XY } from "./requests";
 
 export type GridGeometry = { x0: number; y0: number; step: number; nx: number; ny: number };
@@ -14,19 +15,10 @@ export const LEVEL_TOLERANCE_M = 0.5;
 
 export const cellCentre = (g: GridGeometry, index: number): XY => [g.x0 + (index % g.nx) * g.step, g.y0 + Math.floor(index / g.nx) * g.step];
 
-export function pointInPolygon([x, y]: XY, polygon: XY[]) {
-  let inside = false;
-  for (let i = 0, j = polygon.length - 1; i < polygon.length; j = i++) {
-    const [xi, yi] = polygon[i];
-    const [xj, yj] = polygon[j];
-    if (yi > y !== yj > y && x < ((xj - xi) * (y - yi)) / (yj - yi) + xi) inside = !inside;
-  }
-  return inside;
-}
 
 /** Plan distance from a point to a polygon (0 inside). */
 export function distanceToPolygon(p: XY, polygon: XY[]) {
-  if (pointInPolygon(p, polygon)) return 0;
+  if (pointInPolygon(p[0], p[1], polygon)) return 0;
   let best = Infinity;
   for (let i = 0; i < polygon.length; i++) {
     const [ax, ay] = polygon[i];
@@ -53,7 +45,7 @@ export function walkableCells(g: GridGeometry, classes: number[], obstructions: 
   for (let k = 0; k < classes.length; k++) {
     if (classes[k] === 255) continue;
     const c = cellCentre(g, k);
-    out[k] = standing.some((o) => pointInPolygon(c, o.polygon)) ? 0 : 1;
+    out[k] = standing.some((o) => pointInPolygon(c[0], c[1], o.polygon)) ? 0 : 1;
   }
   return out;
 }

@@ -1,6 +1,7 @@
 // The layout editor's working copy: every number kept as the text being typed (so "-" or "4."
 // can stand while typing), turned into the API's layout for the plan, the checks and the save.
 // Pure, shared by the editor and its tests.
+import { pointInPolygon } from "~/engine";
 import { validateLayout, type XY } from "./geometry";
 import type { LayoutJson } from "./json";
 import type { Access, AccessPointKind, BackdropPlacement, LayoutInput } from "./schemas";
@@ -126,15 +127,9 @@ export function planOf(items: LayoutItem[]) {
   return { surfaces, obstructions, accessPoints };
 }
 
-/** Whether a point lies inside an outline: the even–odd ray-crossing test (common practice, e.g. O'Rourke, Computational Geometry in C, §7.4, from memory). */
+/** Whether a point lies inside an outline: the engine's even–odd ray-crossing test. */
 export function insideOutline(points: readonly XY[], [x, y]: XY) {
-  let inside = false;
-  for (let i = 0, j = points.length - 1; i < points.length; j = i++) {
-    const [xi, yi] = points[i];
-    const [xj, yj] = points[j];
-    if (yi > y !== yj > y && x < ((xj - xi) * (y - yi)) / (yj - yi) + xi) inside = !inside;
-  }
-  return inside;
+  return pointInPolygon(x, y, points);
 }
 
 function distanceToSegment([x, y]: XY, [a, b]: [XY, XY]) {

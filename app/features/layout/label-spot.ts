@@ -1,6 +1,7 @@
 // Where an area's name goes on the plan: at its middle unless something else is drawn there
 // (an emitter, an access point and its name, another label), then at the spot inside the area
 // that keeps the most room around the name. Pure, in SVG pixels. Common practice, no source.
+import { pointInPolygon } from "~/engine";
 import type { XY } from "./plan-frame";
 
 /** A box in pixels: x0 < x1, y0 < y1 (y down). */
@@ -25,15 +26,10 @@ export function rectDistance(a: Rect, b: Rect) {
   return Math.hypot(dx, dy);
 }
 
-function inside([x, y]: XY, polygon: readonly XY[]) {
-  let hit = false;
-  for (let i = 0, j = polygon.length - 1; i < polygon.length; j = i++) {
-    const [xi, yi] = polygon[i];
-    const [xj, yj] = polygon[j];
-    if (yi > y !== yj > y && x < ((xj - xi) * (y - yi)) / (yj - yi) + xi) hit = !hit;
-  }
-  return hit;
-}
+/** Whether two boxes share more than an edge. */
+export const rectsOverlap = (a: Rect, b: Rect) => a.x0 < b.x1 && b.x0 < a.x1 && a.y0 < b.y1 && b.y0 < a.y1;
+
+const inside = ([x, y]: XY, polygon: readonly XY[]) => pointInPolygon(x, y, polygon);
 
 function vertexMean(points: readonly XY[]): XY {
   const n = points.length || 1;

@@ -3,7 +3,7 @@
 // layers on top through `children(frame)` (emitters, readings, exposure) in site metres via
 // frame.toPx. Clicks report site coordinates, so a polygon can be drawn on the plan.
 import { useEffect, useId, useMemo, useRef, useState, type MouseEvent, type ReactNode } from "react";
-import { areaLabelBox, areaLabelSpot, lineLabelBox, type Rect } from "./label-spot";
+import { areaLabelBox, areaLabelSpot, lineLabelBox, rectsOverlap, type Rect } from "./label-spot";
 import { backdropCorners, boundsOf, makeFrame, scaleBarMetres, type Bounds, type PlanFrame, type XY } from "./plan-frame";
 
 export type PlanSurface = { id: string; name: string; kind: "area" | "facade"; polygon?: XY[] | null; line?: [XY, XY] | null; elevationM?: number | null; bottomM?: number | null; topM?: number | null; access: "public" | "workers" | "none" };
@@ -118,7 +118,7 @@ export function SitePlan({ title, surfaces, obstructions = [], accessPoints = []
     const drawn = [...names];
     accessPoints.forEach((a, k) => {
       const box = nameBox(accessBoxes[k]);
-      if (drawn.some((n) => n.x0 < box.x1 && box.x0 < n.x1 && n.y0 < box.y1 && box.y0 < n.y1)) return;
+      if (drawn.some((n) => rectsOverlap(n, box))) return;
       shown.add(a.id);
       drawn.push(box);
     });
